@@ -1,0 +1,19 @@
+import type { App } from 'vue'
+import { createPinia } from 'pinia'
+import vuetify from './vuetify'
+import router from '../router'
+import { whenSignedOut } from '../api/client'
+import { signInFor } from '../router/guard'
+import { useSessionStore } from '../stores/session'
+
+/** Registers vuetify, pinia and the router, and decides what a lapsed session does. */
+export function registerPlugins(app: App) {
+  const pinia = createPinia()
+  app.use(vuetify).use(pinia).use(router)
+
+  whenSignedOut(() => {
+    useSessionStore(pinia).clear()
+    const here = router.currentRoute.value
+    if (here.name !== 'session-sign-in') void router.push(signInFor(here.fullPath))
+  })
+}

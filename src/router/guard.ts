@@ -1,0 +1,26 @@
+import type { NavigationGuardWithThis, RouteLocationRaw } from 'vue-router'
+import { useSessionStore } from '../stores/session'
+
+/** Only a path inside this app may be a place to come back to after signing in. */
+export function safeRedirect(value: unknown): string | undefined {
+  return typeof value === 'string' && value.startsWith('/') && !value.startsWith('//') ? value : undefined
+}
+
+export const signInFor = (path: string): RouteLocationRaw => ({ name: 'session-sign-in', query: { redirect: path } })
+
+/** Unknown people go to sign in; a page a role cannot use sends the person to the linesets. */
+export const guardRoute: NavigationGuardWithThis<undefined> = async (to) => {
+  const session = useSessionStore()
+  try {
+    await session.load()
+  } catch {
+    // Without a session answer the server is unreachable; the sign-in page says so when it is tried.
+  }
+  if (to.name === 'session-sign-in' && session.signedIn)
+    return safeRedirect(to.query.redirect) ?? { name: 'linesets-list' }
+  if (to.meta.public) return true
+  if (!session.signedIn) return signInFor(to.fullPath)
+  const roles = to.meta.roles
+  if (roles && (!session.role || !roles.includes(session.role))) return { name: 'linesets-list' }
+  return true
+}

@@ -1,0 +1,67 @@
+import type { RouteRecordRaw } from 'vue-router'
+import { INVENTORY_EDITORS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/index.js'
+
+declare module 'vue-router' {
+  interface RouteMeta {
+    /** Reachable without signing in. */
+    public?: boolean
+    /** Roles that may open the page; absent on public pages. */
+    roles?: readonly Role[]
+    title?: string
+  }
+}
+
+const everyone: readonly Role[] = ROLES
+
+export const routes: RouteRecordRaw[] = [
+  {
+    path: '/sign-in',
+    name: 'session-sign-in',
+    component: () => import('../views/SessionSignInView.vue'),
+    meta: { public: true, title: 'Sign in' },
+  },
+  { path: '/', name: 'home', redirect: { name: 'linesets-list' } },
+  {
+    path: '/linesets',
+    name: 'linesets-list',
+    component: () => import('../views/LinesetsListView.vue'),
+    meta: { roles: everyone, title: 'Linesets' },
+  },
+  {
+    path: '/linesets/new',
+    name: 'lineset-new',
+    component: () => import('../views/LinesetEditView.vue'),
+    meta: { roles: INVENTORY_EDITORS, title: 'New lineset' },
+  },
+  {
+    path: '/linesets/:id',
+    name: 'lineset-detail',
+    component: () => import('../views/LinesetEditView.vue'),
+    props: true,
+    meta: { roles: everyone, title: 'Lineset' },
+  },
+  {
+    path: '/bricks',
+    name: 'brick-types-list',
+    component: () => import('../views/BrickTypesListView.vue'),
+    meta: { roles: everyone, title: 'Bricks' },
+  },
+  {
+    path: '/people',
+    name: 'people-list',
+    component: () => import('../views/PeopleListView.vue'),
+    meta: { roles: PEOPLE_MANAGERS, title: 'People' },
+  },
+  {
+    path: '/venue',
+    name: 'venue-settings',
+    component: () => import('../views/VenueSettingsView.vue'),
+    meta: { roles: INVENTORY_EDITORS, title: 'Venue settings' },
+  },
+  {
+    path: '/:pathMatch(.*)*',
+    name: 'not-found',
+    component: () => import('../views/NotFoundView.vue'),
+    meta: { public: true, title: 'Not found' },
+  },
+]

@@ -1,0 +1,48 @@
+import { defineStore } from 'pinia'
+import { computed, ref } from 'vue'
+import { canEditInventory, canManagePeople, type SessionUser, type SignIn } from '../../shared/schemas/index.js'
+import { setCsrfToken } from '../api/client'
+import { sessionApi } from '../api/session'
+
+/** Who is signed in, and what that person's role lets the screens offer. */
+export const useSessionStore = defineStore('session', () => {
+  const user = ref<SessionUser | null>(null)
+  const loaded = ref(false)
+
+  const signedIn = computed(() => user.value !== null)
+  const role = computed(() => user.value?.role)
+  const canEdit = computed(() => canEditInventory(role.value))
+  const canManage = computed(() => canManagePeople(role.value))
+
+  function accept(state: { user: SessionUser | null; csrfToken: string }) {
+    user.value = state.user
+    setCsrfToken(state.csrfToken)
+    loaded.value = true
+  }
+
+  /** Reads the session once per page load; the router guard waits for it. */
+  async function load(force = false) {
+    if (loaded.value && !force) return
+    accept(await sessionApi.read())
+  }
+
+  async function signIn(credentials: SignIn) {
+    accept(await sessionApi.signIn(credentials))
+  }
+
+  async function signOut() {
+    try {
+      await sessionApi.signOut()
+    } finally {
+      clear()
+    }
+  }
+
+  /** Forgets the person locally; the next write fetches a fresh token after signing in again. */
+  function clear() {
+    user.value = null
+    setCsrfToken('')
+  }
+
+  return { user, loaded, signedIn, role, canEdit, canManage, load, signIn, signOut, clear }
+})

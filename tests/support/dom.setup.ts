@@ -1,0 +1,29 @@
+// jsdom has no layout engine; Vuetify's drawers, menus and overlays ask for these.
+class ResizeObserverStub {
+  observe() {}
+  unobserve() {}
+  disconnect() {}
+}
+
+globalThis.ResizeObserver ??= ResizeObserverStub as unknown as typeof ResizeObserver
+
+if (!window.visualViewport) {
+  Object.defineProperty(window, 'visualViewport', {
+    value: Object.assign(new EventTarget(), { width: 1280, height: 800, offsetLeft: 0, offsetTop: 0, pageLeft: 0, pageTop: 0, scale: 1 }),
+  })
+}
+
+window.matchMedia ??= (query: string) =>
+  ({
+    matches: false,
+    media: query,
+    onchange: null,
+    addEventListener() {},
+    removeEventListener() {},
+    addListener() {},
+    removeListener() {},
+    dispatchEvent: () => false,
+  }) as unknown as MediaQueryList
+
+window.scrollTo = () => {}
+Element.prototype.scrollIntoView ??= () => {}

@@ -57,4 +57,81 @@ describe('LinesetForm', () => {
     expect(messagesOf(w, 'lineset-pick-point-2')).toBe('Lies beyond the end of the batten')
     expect(messagesOf(w, 'lineset-pick-point-1')).toBe('')
   })
+
+  it('when a counterweight set is submitted without arbor figures, then both arbor fields say they are needed and nothing is sent', async () => {
+    const w = mountForm({ initial: { ...counterweightSet, arborEmptyWeight: null, arborCapacity: null } })
+    await submit(w)
+    expect(messagesOf(w, 'lineset-field-arborEmptyWeight')).toBe('A counterweight set needs its arbor empty weight')
+    expect(messagesOf(w, 'lineset-field-arborCapacity')).toBe('A counterweight set needs its arbor capacity')
+    expect(w.find('[data-testid="lineset-form-problems"]').exists()).toBe(true)
+    expect(w.emitted('submit')).toBeUndefined()
+  })
+
+  it('when the set is hemp, then the arbor section is hidden, the sandbag section shows, and arbor figures are sent empty', async () => {
+    const w = mountForm({ initial: { ...counterweightSet, kind: 'hemp-multi', sandbagWeight: 20 } })
+    expect(w.find('[data-testid="lineset-section-arbor"]').exists()).toBe(false)
+    expect(w.find('[data-testid="lineset-section-sandbag"]').exists()).toBe(true)
+    expect(w.find('[data-testid="lineset-section-hoist"]').exists()).toBe(false)
+    await submit(w)
+    const [body] = w.emitted<[LinesetInput]>('submit')?.[0] ?? []
+    expect(body).toMatchObject({ kind: 'hemp-multi', sandbagWeight: 20, arborEmptyWeight: null, arborCapacity: null, pipeWeight: null })
+  })
+
+  it('when every field is valid, then submitting emits a body the shared schema accepts unchanged', async () => {
+    const w = mountForm({ initial: counterweightSet })
+    await input(w, 'lineset-field-name').setValue('  Border 3  ')
+    await input(w, 'lineset-field-travel').setValue('52.5')
+    await submit(w)
+    const [body] = w.emitted<[LinesetInput]>('submit')?.[0] ?? []
+    expect(body).toEqual({ ...counterweightSet, name: 'Border 3', travel: 52.5 })
+    expect(linesetInputSchema.parse(body)).toEqual(body)
+  })
+
+  it('when a required figure is cleared and the field is left, then it asks for a number', async () => {
+    const w = mountForm({ initial: counterweightSet })
+    const length = input(w, 'lineset-field-battenLength')
+    await length.setValue('')
+    await length.trigger('blur')
+    expect(messagesOf(w, 'lineset-field-battenLength')).toBe('Enter a number')
+  })
+
+  it('when the server names a field, then its message shows at that position until the field is changed', async () => {
+    const w = mountForm({ initial: counterweightSet, serverFields: { 'pickPoints.1': 'Too close to the next line' } })
+    await flushPromises()
+    expect(messagesOf(w, 'lineset-pick-point-1')).toBe('Too close to the next line')
+    await input(w, 'lineset-pick-point-1').setValue('14')
+    expect(messagesOf(w, 'lineset-pick-point-1')).toBe('')
+  })
+
+  it('when lines are added and spread evenly, then they sit between the first and last line in equal steps', async () => {
+    const w = mountForm({ initial: { ...counterweightSet, pickPoints: [2, 38] } })
+    await w.get('[data-testid="lineset-add-pick-point"]').trigger('click')
+    await w.get('[data-testid="lineset-add-pick-point"]').trigger('click')
+    expect(w.findAll('[data-testid^="lineset-pick-point-"]')).toHaveLength(4)
+    await w.get('[data-testid="lineset-remove-pick-point-3"]').trigger('click')
+    await input(w, 'lineset-pick-point-2').setValue('38')
+    await input(w, 'lineset-pick-point-1').setValue('')
+    await w.get('[data-testid="lineset-spread-pick-points"]').trigger('click')
+    const shown = [0, 1, 2].map((index) => (input(w, `lineset-pick-point-${index}`).element as HTMLInputElement).value)
+    expect(shown).toEqual(['2', '20', '38'])
+  })
+
+  it('when the form is read-only, then no save, cancel or lift line controls are offered and fields cannot be typed in', () => {
+    const w = mountForm({ initial: counterweightSet, readonly: true })
+    for (const testid of ['lineset-save', 'lineset-cancel', 'lineset-add-pick-point', 'lineset-spread-pick-points', 'lineset-remove-pick-point-0'])
+      expect(w.find(`[data-testid="${testid}"]`).exists(), testid).toBe(false)
+    expect(input(w, 'lineset-field-name').attributes('readonly')).toBeDefined()
+    expect(input(w, 'lineset-pick-point-0').attributes('readonly')).toBeDefined()
+    expect((input(w, 'lineset-field-name').element as HTMLInputElement).value).toBe('Main drape')
+  })
+
+  it('when figures are shown in metric, then every suffix carries the metric unit', () => {
+    const w = mountForm({ initial: counterweightSet, unitSystem: 'metric' })
+    const suffix = (testid: string) => w.get(`[data-testid="${testid}"] .v-text-field__suffix`).text()
+    expect(suffix('lineset-field-battenLength')).toBe('m')
+    expect(suffix('lineset-field-arborCapacity')).toBe('kg')
+    expect(suffix('lineset-field-pipeWeightPerLength')).toBe('kg/m')
+    expect(suffix('lineset-field-arborStackLength')).toBe('mm')
+    expect(suffix('lineset-field-pipeMomentOfInertia')).toBe('mm⁴')
+  })
 })

@@ -1,0 +1,101 @@
+import { Dec, type UnitSystem } from '../units/index.js'
+import type { Decimal } from 'decimal.js'
+import type { CalculationInput } from '../schemas/calculation.js'
+import { buildBattenModel, type BattenLoads } from './batten-model.js'
+import { solveContinuousBeam } from './continuous-beam.js'
+import { peakMoment, type PeakMoment } from './bending-moment.js'
+import { battenDeflections } from './deflection.js'
+import { resolvePipe, type PipeProperties } from './pipe-properties.js'
+import { bendingStress, deflectionFromEIy } from './structural-units.js'
+
+/**
+ * Allowable bending stress 0.66·Fy: the allowable-stress-design value for compact sections, common
+ * practice for round steel tube whose D/t is far below the compact limit (1-1/2 in Sch 40: D/t ≈ 13).
+ */
+export const ALLOWABLE_BENDING_FACTOR = Dec('0.66')
+export const ALLOWABLE_BENDING_BASIS = '0.66 × Fy (allowable stress design, compact round tube), on the nominal wall'
+
+export interface BattenAnalysis {
+  battenWeight: Decimal
+  hardwareWeight: Decimal
+  itemsWeight: Decimal
+  totalLoad: Decimal
+  lineLoads: Decimal[]
+  peak: PeakMoment
+  /** One line only: moment of all loads about it (zero when the load hangs at the point). */
+  unbalancedMoment: Decimal
+  pipe?: PipeProperties
+  bending?: { stress: Decimal; allowable: Decimal }
+  /** In or mm, downward positive. */
+  deflection?: {
+    spans: Array<{ from: Decimal; to: Decimal; max: Decimal; at: Decimal }>
+    overhangs: Array<{ end: 'start' | 'end'; length: Decimal; tip: Decimal }>
+  }
+}
+
+/**
+ * Batten self weight, hardware (shared equally at the pick points, where it hangs) and items, the
+ * per-line loads from the continuous-beam analysis, the peak moment, stress and deflections.
+ *
+ * @example
+ * analyseBatten(parsedInput).lineLoads.map(String) // one load per pick point, summing to the total
+ */
+export function analyseBatten(input: CalculationInput): BattenAnalysis {
+  const { batten, units } = input
+  const pipe = resolvePipe(batten, units)
+  const selfWeightPerLength = batten.weightPerLength === undefined ? pipe?.weightPerLength ?? Dec(0) : Dec(batten.weightPerLength)
+  const loads = collectLoads(input, selfWeightPerLength)
+  const model = buildBattenModel(loads.beam)
+  const solution = solveContinuousBeam(model)
+  const analysis: BattenAnalysis = {
+    ...loads.totals,
+    lineLoads: solution.reactions,
+    peak: peakMoment(model, solution),
+    unbalancedMoment: solution.unbalancedMoment,
+  }
+  if (!pipe) return analysis
+  analysis.pipe = pipe
+  analysis.bending = {
+    stress: bendingStress(analysis.peak.value.abs(), pipe.sectionModulus, units),
+    allowable: pipe.yieldStrength.times(ALLOWABLE_BENDING_FACTOR),
+  }
+  if (model.supports.length >= 2) analysis.deflection = toLengths(battenDeflections(model, solution), pipe, units)
+  return analysis
+}
+
+function collectLoads(input: CalculationInput, selfWeightPerLength: Decimal) {
+  const { batten } = input
+  const points: BattenLoads['points'] = []
+  const spreads: BattenLoads['spreads'] = [{ from: 0, to: batten.length, weightPerLength: selfWeightPerLength }]
+  let itemsWeight = Dec(0)
+  for (const item of input.items) {
+    if (item.at !== undefined && item.weight !== undefined) {
+      points.push({ at: item.at, weight: item.weight })
+      itemsWeight = itemsWeight.plus(item.weight)
+    } else if (item.weightPerLength !== undefined) {
+      const from = item.from ?? 0
+      const to = item.to ?? batten.length
+      spreads.push({ from, to, weightPerLength: item.weightPerLength })
+      itemsWeight = itemsWeight.plus(Dec(item.weightPerLength).times(Dec(to).minus(from)))
+    }
+  }
+  const hardwareWeight = Dec(input.hardwareWeight ?? 0)
+  if (!hardwareWeight.isZero()) {
+    const share = hardwareWeight.div(batten.pickPoints.length)
+    for (const at of batten.pickPoints) points.push({ at, weight: share })
+  }
+  const battenWeight = selfWeightPerLength.times(batten.length)
+  const totalLoad = battenWeight.plus(hardwareWeight).plus(itemsWeight)
+  return {
+    beam: { length: batten.length, pickPoints: batten.pickPoints, points, spreads },
+    totals: { battenWeight, hardwareWeight, itemsWeight, totalLoad },
+  }
+}
+
+function toLengths(figures: ReturnType<typeof battenDeflections>, pipe: PipeProperties, units: UnitSystem) {
+  const length = (eiy: Decimal) => deflectionFromEIy(eiy, pipe.elasticModulus, pipe.momentOfInertia, units)
+  return {
+    spans: figures.spans.map(({ from, to, drop, at }) => ({ from, to, max: length(drop), at })),
+    overhangs: figures.overhangs.map(({ end, length: overhang, drop }) => ({ end, length: overhang, tip: length(drop) })),
+  }
+}

@@ -1,0 +1,83 @@
+import { Dec } from '../units/index.js'
+import type { Decimal } from 'decimal.js'
+
+/** A venue's brick type and how many are free to load. */
+export interface BrickStock { name: string; weight: number; thickness: number; available: number }
+
+/** Counts per brick type (in stock order) and what they add up to. */
+export interface BrickPlan { counts: number[]; loaded: Decimal; stackUsed: Decimal; bricks: number }
+
+interface Scaled { weight: number; thickness: number; available: number; index: number }
+
+/**
+ * The heaviest load of bricks not above `limit` (so the set stays balanced or batten heavy), with the
+ * fewest bricks among equal weights, within the stock and the stack length. Exact: weights and
+ * thicknesses are scaled to whole numbers at their common decimal precision and searched by
+ * branch and bound, heaviest type first.
+ *
+ * @example
+ * planBricks([{ name: 'full', weight: 20, thickness: 2, available: 80 }, { name: 'half', weight: 10, thickness: 1, available: 10 }], 250, 60)
+ *   .counts // [12, 1]
+ */
+export function planBricks(stock: readonly BrickStock[], limit: Decimal.Value, stackRoom: Decimal.Value): BrickPlan {
+  const weightScale = Dec(10).pow(Math.max(0, ...stock.map((b) => Dec(b.weight).decimalPlaces())))
+  const thicknessScale = Dec(10).pow(Math.max(0, ...stock.map((b) => Dec(b.thickness).decimalPlaces())))
+  const types: Scaled[] = stock
+    .map((b, index) => ({
+      weight: Dec(b.weight).times(weightScale).toNumber(),
+      thickness: Dec(b.thickness).times(thicknessScale).toNumber(),
+      available: b.available,
+      index,
+    }))
+    .filter((t) => t.available > 0)
+    .sort((a, b) => b.weight - a.weight || a.thickness - b.thickness)
+  const divisor = types.reduce((g, t) => greatestCommonDivisor(g, t.weight), 0) || 1
+  const rawLimit = Dec.max(0, Dec(limit).times(weightScale).floor()).toNumber()
+  const best = search(types, rawLimit - (rawLimit % divisor), Dec.max(0, Dec(stackRoom).times(thicknessScale).floor()).toNumber())
+  const counts = stock.map(() => 0)
+  best.counts.forEach((count, k) => (counts[types[k]!.index] = count))
+  const loaded = stock.reduce((sum, b, i) => sum.plus(Dec(b.weight).times(counts[i]!)), Dec(0))
+  const stackUsed = stock.reduce((sum, b, i) => sum.plus(Dec(b.thickness).times(counts[i]!)), Dec(0))
+  return { counts, loaded, stackUsed, bricks: counts.reduce((a, b) => a + b, 0) }
+}
+
+function greatestCommonDivisor(a: number, b: number): number {
+  return b === 0 ? a : greatestCommonDivisor(b, a % b)
+}
+
+function search(types: Scaled[], limit: number, stackRoom: number) {
+  const n = types.length
+  const restWeight: number[] = new Array(n + 1).fill(0)
+  const restDensity: number[] = new Array(n + 1).fill(0)
+  for (let i = n - 1; i >= 0; i--) {
+    const t = types[i]!
+    restWeight[i] = restWeight[i + 1]! + t.weight * t.available
+    restDensity[i] = Math.max(restDensity[i + 1]!, t.weight / t.thickness)
+  }
+  let bestWeight = -1
+  let bestCount = Infinity
+  let bestCounts: number[] = []
+  const counts: number[] = new Array(n).fill(0)
+  const visit = (i: number, weight: number, stackLeft: number, count: number): void => {
+    if (weight > bestWeight || (weight === bestWeight && count < bestCount)) {
+      bestWeight = weight
+      bestCount = count
+      bestCounts = counts.slice()
+    }
+    if (i === n || weight === limit) return
+    // The +1 keeps the floating-point stack bound safely above the true bound.
+    const reach = Math.min(limit - weight, restWeight[i]!, Math.floor(stackLeft * restDensity[i]!) + 1)
+    const t = types[i]!
+    if (weight + reach < bestWeight) return
+    if (weight + reach === bestWeight && count + Math.ceil((bestWeight - weight) / t.weight) >= bestCount) return
+    const most = Math.min(t.available, Math.floor((limit - weight) / t.weight), Math.floor(stackLeft / t.thickness))
+    const least = i === n - 1 ? most : 0
+    for (let c = most; c >= least; c--) {
+      counts[i] = c
+      visit(i + 1, weight + c * t.weight, stackLeft - c * t.thickness, count + c)
+    }
+    counts[i] = 0
+  }
+  visit(0, 0, stackRoom, 0)
+  return { counts: bestCounts }
+}

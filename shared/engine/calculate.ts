@@ -1,0 +1,75 @@
+import { roundTo, unitLabel } from '../units/index.js'
+import type { Decimal } from 'decimal.js'
+import { validationErrorBody, type ErrorBody } from '../errors/fields.js'
+import { calculationInputSchema, type CalculationInput, type CalculationResult } from '../schemas/calculation.js'
+import { analyseBatten } from './batten-analysis.js'
+import { battenChecks } from './batten-checks.js'
+import { lineChecks, ratedLoadChecks, workingLoadLimit } from './capacity-checks.js'
+import { sortChecks, type Check } from './checks.js'
+import { FIGURES_DISCLAIMER } from './cautions.js'
+import { kindFigures } from './kind-figures.js'
+
+const r = (value: Decimal.Value) => roundTo(value, 2)
+
+/**
+ * Balances one lineset: batten analysis, per-line loads, counterweight and brick plan, travel shift,
+ * capacities and the kind's own checks. Assumes input already parsed by {@link calculationInputSchema}.
+ *
+ * @example
+ * calculate(calculationInputSchema.parse(raw)).lineLoads // [{ at: 0, load: ... }, ...]
+ */
+export function calculate(input: CalculationInput): CalculationResult {
+  const { units, batten } = input
+  const analysis = analyseBatten(input)
+  const checks: Check[] = [
+    ...lineChecks(analysis.lineLoads, batten.pickPoints, units, input.liftLine),
+    ...ratedLoadChecks(analysis.totalLoad, input.ratedLoad, units),
+    ...battenChecks(analysis, input.kind, batten.pickPoints, units),
+  ]
+  const result: CalculationResult = {
+    units,
+    kind: input.kind,
+    notice: FIGURES_DISCLAIMER,
+    unitLabels: {
+      weight: unitLabel('weight', units),
+      length: unitLabel('length', units),
+      shortLength: unitLabel('shortLength', units),
+      moment: `${unitLabel('weight', units)}·${unitLabel('length', units)}`,
+      stress: unitLabel('stress', units),
+    },
+    battenWeight: r(analysis.battenWeight),
+    hardwareWeight: r(analysis.hardwareWeight),
+    itemsWeight: r(analysis.itemsWeight),
+    totalLoad: r(analysis.totalLoad),
+    lineLoads: analysis.lineLoads.map((load, k) => ({ at: batten.pickPoints[k]!, load: r(load) })),
+    moment: { max: r(analysis.peak.value), at: r(analysis.peak.at) },
+    checks,
+  }
+  if (input.liftLine?.breakingStrength !== undefined)
+    result.lineWorkingLoadLimit = r(workingLoadLimit(input.liftLine.breakingStrength, input.liftLine.designFactor))
+  if (analysis.bending) {
+    const { stress, allowable } = analysis.bending
+    result.bending = { stress: r(stress), allowable: r(allowable), utilisation: roundTo(stress.div(allowable), 4), basis: 'nominal wall; allowable 0.66 × Fy' }
+  }
+  if (analysis.deflection) {
+    result.deflection = {
+      spans: analysis.deflection.spans.map((s) => ({ from: r(s.from), to: r(s.to), max: r(s.max), at: r(s.at) })),
+      overhangs: analysis.deflection.overhangs.map((o) => ({ end: o.end, length: r(o.length), tip: r(o.tip) })),
+    }
+  }
+  Object.assign(result, kindFigures(input, analysis, checks))
+  result.checks = sortChecks(checks)
+  return result
+}
+
+/**
+ * Validates raw input (from JSON) and calculates, or answers the one error shape naming the fields.
+ *
+ * @example
+ * runCalculation({ units: 'furlongs' }) // { ok: false, error: { error: { code: 'validation_failed', ... } } }
+ */
+export function runCalculation(raw: unknown): { ok: true; result: CalculationResult } | { ok: false; error: ErrorBody } {
+  const parsed = calculationInputSchema.safeParse(raw)
+  if (!parsed.success) return { ok: false, error: validationErrorBody(parsed.error.issues) }
+  return { ok: true, result: calculate(parsed.data) }
+}

@@ -1,0 +1,92 @@
+import { z } from 'zod'
+import { nonNegative, optionalNonNegative, optionalPositive, positive, requiredText, versionField } from './quantity.js'
+
+/** Every kind of lineset a house may have; each is balanced and checked differently. */
+export const LINESET_KINDS = [
+  'counterweight-single',
+  'counterweight-double',
+  'hemp-single',
+  'hemp-multi',
+  'spot-line',
+  'motorized',
+] as const
+export type LinesetKind = (typeof LINESET_KINDS)[number]
+
+/** Whether the set may be used: our own three words, not a balance state. */
+export const LINESET_STATUSES = ['in-service', 'needs-inspection', 'out-of-service'] as const
+export type LinesetStatus = (typeof LINESET_STATUSES)[number]
+
+export const MAX_PICK_POINTS = 16
+
+export const isCounterweightKind = (kind: LinesetKind) =>
+  kind === 'counterweight-single' || kind === 'counterweight-double'
+
+/** Pipe choice: a key of the standard pipe table, or `custom` with figures entered by hand. */
+const pipeSize = z.string({ error: 'Choose a pipe size' }).trim().min(1, 'Choose a pipe size').max(40)
+
+const linesetFields = z.object({
+  number: z.number({ error: 'Enter a number' }).int('Must be a whole number').min(1, 'Must be 1 or more').max(9999),
+  name: requiredText(80),
+  kind: z.enum(LINESET_KINDS, { error: 'Choose a kind of lineset' }),
+  status: z.enum(LINESET_STATUSES, { error: 'Choose a status' }),
+  distanceFromPlasterLine: optionalNonNegative(),
+  battenLength: positive(),
+  pipeSize,
+  pipeWeightPerLength: nonNegative(),
+  pipeMomentOfInertia: optionalPositive(),
+  pipeSectionModulus: optionalPositive(),
+  pickPoints: z
+    .array(nonNegative(), { error: 'List the lift line positions' })
+    .min(1, 'At least one lift line')
+    .max(MAX_PICK_POINTS, `At most ${MAX_PICK_POINTS} lift lines`),
+  liftLineWeightPerLength: optionalNonNegative(),
+  liftLineBreakingStrength: optionalPositive(),
+  arborEmptyWeight: optionalNonNegative(),
+  arborCapacity: optionalPositive(),
+  arborStackLength: optionalPositive(),
+  ratedLoad: optionalPositive(),
+  pipeWeight: optionalNonNegative(),
+  travel: optionalPositive(),
+  sandbagWeight: optionalNonNegative(),
+  hoistRatedCapacity: optionalPositive(),
+  hoistSpeed: optionalPositive(),
+  notes: z.string().trim().max(2000, 'At most 2000 characters').optional(),
+})
+
+type LinesetFields = z.infer<typeof linesetFields>
+
+/** Rules between fields: positions along the batten, and what each kind must have. */
+function checkLineset(value: LinesetFields, ctx: z.RefinementCtx) {
+  value.pickPoints.forEach((at, index) => {
+    const previous = value.pickPoints[index - 1]
+    if (at > value.battenLength)
+      ctx.addIssue({ code: 'custom', path: ['pickPoints', index], message: 'Lies beyond the end of the batten' })
+    else if (previous !== undefined && at <= previous)
+      ctx.addIssue({ code: 'custom', path: ['pickPoints', index], message: 'List positions in order, each once' })
+  })
+  const require = (field: keyof LinesetFields, message: string) => {
+    if (value[field] === null || value[field] === undefined) ctx.addIssue({ code: 'custom', path: [field], message })
+  }
+  if (isCounterweightKind(value.kind)) {
+    require('arborEmptyWeight', 'A counterweight set needs its arbor empty weight')
+    require('arborCapacity', 'A counterweight set needs its arbor capacity')
+  }
+  if (value.kind === 'motorized') require('hoistRatedCapacity', 'A motorized set needs its hoist rated capacity')
+  if (value.kind === 'hemp-single' && value.pickPoints.length !== 1)
+    ctx.addIssue({ code: 'custom', path: ['pickPoints'], message: 'A single-line hemp set has exactly one line' })
+}
+
+/** The lineset form and the body of `POST /api/v1/linesets`, figures in the venue's units. */
+export const linesetInputSchema = linesetFields.superRefine(checkLineset)
+export type LinesetInput = z.infer<typeof linesetInputSchema>
+
+/** The body of `PUT /api/v1/linesets/:id`: the whole lineset plus the version it was read at. */
+export const linesetUpdateSchema = linesetFields.extend({ version: versionField() }).superRefine(checkLineset)
+export type LinesetUpdate = z.infer<typeof linesetUpdateSchema>
+
+/** A lineset as the API returns it. */
+export interface Lineset extends LinesetInput {
+  id: string
+  version: number
+  updatedAt: string
+}

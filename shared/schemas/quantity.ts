@@ -1,0 +1,25 @@
+import { z } from 'zod'
+
+/**
+ * Field builders shared by every form and route, so a figure is refused with the
+ * same words on the screen and from the API.
+ */
+
+/** A finite figure at or above zero. */
+export const nonNegative = () =>
+  z.number({ error: 'Enter a number' }).finite('Enter a finite number').min(0, 'Must not be negative')
+
+/** A finite figure above zero. */
+export const positive = () =>
+  z.number({ error: 'Enter a number' }).finite('Enter a finite number').gt(0, 'Must be more than zero')
+
+/** An optional figure: `null` or absent means "not known / not fitted". */
+export const optionalNonNegative = () => nonNegative().nullable().optional()
+export const optionalPositive = () => positive().nullable().optional()
+
+/** A short, required piece of text. */
+export const requiredText = (max: number) =>
+  z.string({ error: 'Enter some text' }).trim().min(1, 'Must not be empty').max(max, `At most ${max} characters`)
+
+/** Optimistic-lock token every update carries; a stale one is refused with 409. */
+export const versionField = () => z.number({ error: 'Version is required' }).int().min(0)

@@ -1,0 +1,18 @@
+/** What a person may do in one venue. */
+export const ROLES = ['administrator', 'technical-director', 'fly-operator', 'stage-manager'] as const
+export type Role = (typeof ROLES)[number]
+
+export const ROLE_LABELS: Readonly<Record<Role, string>> = {
+  administrator: 'Administrator',
+  'technical-director': 'Technical director',
+  'fly-operator': 'Fly operator',
+  'stage-manager': 'Stage manager',
+}
+
+/** Who may change the rigging inventory (linesets, bricks) and the venue's policies. */
+export const INVENTORY_EDITORS: readonly Role[] = ['administrator', 'technical-director']
+/** Who may manage people and their roles. */
+export const PEOPLE_MANAGERS: readonly Role[] = ['administrator']
+
+export const canEditInventory = (role: Role | undefined) => !!role && INVENTORY_EDITORS.includes(role)
+export const canManagePeople = (role: Role | undefined) => !!role && PEOPLE_MANAGERS.includes(role)

@@ -1,0 +1,81 @@
+// `npm start`: the private PostgreSQL cluster, migrations, demo data, the built client and the server,
+// in one process that stops all of it on Ctrl-C.
+import { createServer } from 'node:net'
+import { join } from 'node:path'
+import { loadConfig } from '../server/config.js'
+import { connectDatabase } from '../server/db/connection.js'
+import { migrate } from '../server/db/migrate.js'
+import { defineModels } from '../server/db/models.js'
+import { DEMO_PASSWORD, DEMO_PEOPLE } from '../server/db/seeders/demo-people.js'
+import { seedDemoIfEmpty } from '../server/db/seeders/demo.js'
+import { ListenError, startServer } from '../server/index.js'
+import { buildClientIfStale } from './lib/client-build.js'
+import { ensureDatabase } from './lib/database.js'
+import { loadDotEnv, localSessionSecret } from './lib/local-env.js'
+import { projectRoot } from './lib/paths.js'
+import { startCluster, stopCluster, type Cluster } from './lib/postgres.js'
+
+const say = (line: string) => console.log(`loftledger: ${line}`)
+
+function portIsFree(host: string, port: number) {
+  return new Promise<boolean>((resolve) => {
+    const probe = createServer()
+    probe.once('error', () => resolve(false))
+    probe.listen(port, host, () => probe.close(() => resolve(true)))
+  })
+}
+
+async function main() {
+  loadDotEnv()
+  const host = process.env.HOST ?? '127.0.0.1'
+  const port = Number(process.env.PORT ?? 3000)
+  if (!(await portIsFree(host, port))) throw new ListenError(`Port ${port} on ${host} is already in use; stop whatever uses it or set PORT to another port`)
+
+  let cluster: Cluster | null = null
+  if (!process.env.DATABASE_URL) {
+    say('starting the private PostgreSQL cluster...')
+    cluster = startCluster({ name: 'postgres', port: Number(process.env.LOFTLEDGER_PG_PORT ?? 54329), password: true }).cluster
+    await ensureDatabase(cluster.adminUrl, 'loftledger')
+    process.env.DATABASE_URL = cluster.urlFor('loftledger')
+    process.env.SESSION_SECRET ??= localSessionSecret(cluster.root)
+  }
+  const stopDatabase = () => {
+    if (cluster) stopCluster(cluster)
+  }
+
+  try {
+    const config = loadConfig({ ...process.env, CLIENT_DIR: process.env.CLIENT_DIR ?? join(projectRoot, 'dist') })
+    const setup = connectDatabase(config.databaseUrl)
+    await migrate(setup.sequelize, config.databaseUrl)
+    if (await seedDemoIfEmpty({ sequelize: setup.sequelize, models: defineModels(setup.sequelize) })) say('seeded the demo venue')
+    await setup.close()
+    if (await buildClientIfStale(config.clientDir)) say('built the client')
+
+    const running = await startServer(config)
+    say(`serving on ${running.url}`)
+    say(`demo sign-ins (password ${DEMO_PASSWORD}):`)
+    for (const person of DEMO_PEOPLE) console.log(`  ${person.email.padEnd(18)} ${person.role}`)
+    say('press Ctrl-C to stop')
+
+    let stopping = false
+    const stop = async () => {
+      if (stopping) return
+      stopping = true
+      say('stopping...')
+      await running.stop()
+      stopDatabase()
+      say('stopped')
+      process.exit(0)
+    }
+    process.on('SIGINT', stop)
+    process.on('SIGTERM', stop)
+  } catch (error) {
+    stopDatabase()
+    throw error
+  }
+}
+
+main().catch((error) => {
+  console.error(`loftledger: ${error instanceof ListenError ? error.message : error instanceof Error ? error.message : String(error)}`)
+  process.exit(1)
+})

@@ -1,0 +1,54 @@
+import { z } from 'zod'
+
+/** Everything the server reads from its environment, validated once at start into one frozen object. */
+const configSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  DATABASE_URL: z.string().min(1, 'DATABASE_URL is required'),
+  SESSION_SECRET: z.string().min(32, 'SESSION_SECRET must be at least 32 characters'),
+  /** Set when the app sits behind a reverse proxy, so client addresses (rate limits) come from X-Forwarded-For. */
+  TRUST_PROXY: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  /** Send cookies only over HTTPS; on by default in production. */
+  SECURE_COOKIES: z.enum(['true', 'false']).optional(),
+  /** Failed sign-ins allowed per address per minute before 429. */
+  SIGN_IN_ATTEMPTS_PER_MINUTE: z.coerce.number().int().min(1).default(10),
+  /** The built client to serve; absent in API-only tests. */
+  CLIENT_DIR: z.string().optional(),
+})
+
+export type Config = Readonly<{
+  env: 'development' | 'production' | 'test'
+  host: string
+  port: number
+  databaseUrl: string
+  sessionSecret: string
+  trustProxy: boolean
+  secureCookies: boolean
+  signInAttemptsPerMinute: number
+  clientDir?: string
+}>
+
+/**
+ * Validates environment variables into the server's config.
+ * @throws Error naming every variable that is wrong.
+ */
+export function loadConfig(env: Record<string, string | undefined> = process.env): Config {
+  const parsed = configSchema.safeParse(env)
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((issue) => `${issue.path.join('.')}: ${issue.message}`)
+    throw new Error(`Configuration is not valid:\n  ${problems.join('\n  ')}`)
+  }
+  const value = parsed.data
+  return Object.freeze({
+    env: value.NODE_ENV,
+    host: value.HOST,
+    port: value.PORT,
+    databaseUrl: value.DATABASE_URL,
+    sessionSecret: value.SESSION_SECRET,
+    trustProxy: value.TRUST_PROXY,
+    secureCookies: value.SECURE_COOKIES ? value.SECURE_COOKIES === 'true' : value.NODE_ENV === 'production',
+    signInAttemptsPerMinute: value.SIGN_IN_ATTEMPTS_PER_MINUTE,
+    clientDir: value.CLIENT_DIR,
+  })
+}

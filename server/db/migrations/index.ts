@@ -1,0 +1,11 @@
+import foundation from './0001-foundation.js'
+
+export interface Migration {
+  name: string
+  /** SQL run in one transaction. */
+  up: string
+  down: string
+}
+
+/** Every migration, in order. A new one is a new file here, appended to this list; never edit a landed one. */
+export const migrations: Migration[] = [foundation]

@@ -1,0 +1,30 @@
+import type { Sequelize } from 'sequelize'
+import { defineBrickTypeModel } from '../modules/brick-types/brick-type.model.js'
+import { defineLinesetEventModel } from '../modules/ledger/lineset-event.model.js'
+import { defineLinesetModel } from '../modules/linesets/lineset.model.js'
+import { defineMembershipModel } from '../modules/people/membership.model.js'
+import { defineUserModel } from '../modules/people/user.model.js'
+import { defineVenueModel } from '../modules/venues/venue.model.js'
+
+/** Defines every model on one Sequelize instance (no globals, so tests can run several apps in one process). */
+export function defineModels(sequelize: Sequelize) {
+  const models = {
+    Venue: defineVenueModel(sequelize),
+    User: defineUserModel(sequelize),
+    Membership: defineMembershipModel(sequelize),
+    Lineset: defineLinesetModel(sequelize),
+    BrickType: defineBrickTypeModel(sequelize),
+    LinesetEvent: defineLinesetEventModel(sequelize),
+  }
+  models.Membership.belongsTo(models.User, { foreignKey: 'userId', as: 'user' })
+  models.User.hasMany(models.Membership, { foreignKey: 'userId', as: 'memberships' })
+  return models
+}
+
+export type Models = ReturnType<typeof defineModels>
+
+/** What every service receives: the ORM and its models. */
+export interface Database {
+  sequelize: Sequelize
+  models: Models
+}

@@ -1,0 +1,95 @@
+import type { LinesetInput, LinesetKind } from '../../../shared/schemas/lineset.js'
+
+// An invented house, the Fennwick Street Playhouse: a 48 ft batten on five lift lines 10 ft apart
+// with 4 ft overhangs, 1-1/2 in schedule 40 pipe, 1/4 in lift lines. Every figure below is demo data.
+const FIVE_LINES = [4, 14, 24, 34, 44]
+const SIX_LINES = [2, 11, 20, 29, 38, 47]
+
+const PIPE = { pipeSize: 'nps-1-1/2-sch40', pipeWeightPerLength: 2.72, pipeMomentOfInertia: 0.31, pipeSectionModulus: 0.326 }
+const LIFT_LINE = { liftLineWeightPerLength: 0.11, liftLineBreakingStrength: 7000 }
+
+interface Plan {
+  name: string
+  kind?: LinesetKind
+  status?: LinesetInput['status']
+  lines?: number[]
+  notes?: string
+}
+
+const HOUSE: Plan[] = [
+  { name: 'Main valance' },
+  { name: 'House curtain', notes: 'Guillotine; tied to the grand-drape stop at the deck' },
+  { name: 'Border 1' },
+  { name: 'Legs 1' },
+  { name: 'First electric', kind: 'counterweight-double', lines: SIX_LINES },
+  { name: 'Spare' },
+  { name: 'Border 2' },
+  { name: 'Legs 2' },
+  { name: 'Show drop A' },
+  { name: 'Second electric', kind: 'counterweight-double', lines: SIX_LINES },
+  { name: 'Spare', status: 'needs-inspection', notes: 'Rope lock sticks at the top of travel; inspection booked' },
+  { name: 'Border 3' },
+  { name: 'Legs 3' },
+  { name: 'Mid-stage traveller', kind: 'counterweight-double', lines: SIX_LINES },
+  { name: 'Show drop B' },
+  { name: 'Spare' },
+  { name: 'Third electric', kind: 'counterweight-double', lines: SIX_LINES },
+  { name: 'Border 4' },
+  { name: 'Legs 4' },
+  { name: 'Scrim' },
+  { name: 'Spare' },
+  { name: 'Show drop C' },
+  { name: 'Border 5' },
+  { name: 'Legs 5' },
+  { name: 'Fourth electric', kind: 'counterweight-double', lines: SIX_LINES },
+  { name: 'Spare', status: 'out-of-service', notes: 'Lift line at 24 ft frayed; do not use until re-roped' },
+  { name: 'Upstage border' },
+  { name: 'Black-out traveller' },
+  { name: 'Cyclorama electric', kind: 'counterweight-double', lines: SIX_LINES },
+  { name: 'Sky cloth' },
+  { name: 'Upstage spare' },
+  { name: 'Bounce drop' },
+  { name: 'Lighting truss', kind: 'motorized' },
+  { name: 'Sound cluster', kind: 'motorized' },
+  { name: 'Orchestra shell ceiling', kind: 'motorized' },
+  { name: 'Downstage hemp pipe', kind: 'hemp-multi', lines: [4, 24, 44] },
+  { name: 'Upstage hemp pipe', kind: 'hemp-multi', lines: [4, 24, 44], notes: 'Sandbag on the purchase line' },
+  { name: 'Chandelier line', kind: 'hemp-single', lines: [0.5] },
+  { name: 'Spot line stage left', kind: 'spot-line', lines: [0.5] },
+  { name: 'Spot line centre', kind: 'spot-line', lines: [0.5] },
+  { name: 'Spot line stage right', kind: 'spot-line', lines: [0.5], status: 'out-of-service' },
+  { name: 'Far upstage spare' },
+]
+
+function figuresFor(plan: Plan, index: number): Omit<LinesetInput, 'number' | 'name' | 'status'> {
+  const kind = plan.kind ?? 'counterweight-single'
+  const distanceFromPlasterLine = Math.round((1.5 + index * 0.75) * 100) / 100
+  const base = { kind, distanceFromPlasterLine, notes: plan.notes ?? '', ...LIFT_LINE }
+  switch (kind) {
+    case 'counterweight-single':
+      return { ...base, ...PIPE, battenLength: 48, pickPoints: plan.lines ?? FIVE_LINES, arborEmptyWeight: 90, arborCapacity: 1400, arborStackLength: 72, ratedLoad: 1200, pipeWeight: 155, travel: 56 }
+    case 'counterweight-double':
+      return { ...base, ...PIPE, battenLength: 49, pickPoints: plan.lines ?? SIX_LINES, arborEmptyWeight: 110, arborCapacity: 3000, arborStackLength: 84, ratedLoad: 1400, pipeWeight: 320, travel: 56 }
+    case 'motorized':
+      return { ...base, ...PIPE, battenLength: 40, pickPoints: [2, 14, 26, 38], ratedLoad: 2000, hoistRatedCapacity: 2000, hoistSpeed: 180, travel: 56 }
+    case 'hemp-multi':
+      return { ...base, ...PIPE, battenLength: 48, pickPoints: plan.lines ?? [4, 24, 44], ratedLoad: 250, sandbagWeight: plan.notes ? 60 : null, travel: 50, liftLineWeightPerLength: 0.04, liftLineBreakingStrength: 1400 }
+    case 'hemp-single':
+    case 'spot-line':
+      return { ...base, pipeSize: 'custom', pipeWeightPerLength: 0, battenLength: 1, pickPoints: plan.lines ?? [0.5], ratedLoad: kind === 'spot-line' ? 500 : 150, travel: 50 }
+  }
+}
+
+/** Forty-two linesets of every kind, numbered from the plaster line upstage. */
+export const DEMO_LINESETS: LinesetInput[] = HOUSE.map((plan, index) => ({
+  number: index + 1,
+  name: plan.name,
+  status: plan.status ?? 'in-service',
+  ...figuresFor(plan, index),
+}))
+
+export const DEMO_BRICK_TYPES = [
+  { name: 'Full steel brick', material: 'Steel', unitWeight: 19.5, thickness: 2, quantityOwned: 1400 },
+  { name: 'Half steel brick', material: 'Steel', unitWeight: 9.75, thickness: 1, quantityOwned: 420 },
+  { name: 'Lead trim brick', material: 'Lead', unitWeight: 5, thickness: 0.5, quantityOwned: 60 },
+]

@@ -1,0 +1,31 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize'
+import type { Role } from '../../../shared/schemas/role.js'
+import type { UserModel } from './user.model.js'
+
+/** A person's role in one venue; the same account may hold roles in several venues. */
+export function defineMembershipModel(sequelize: Sequelize) {
+  class MembershipModel extends Model<InferAttributes<MembershipModel>, InferCreationAttributes<MembershipModel>> {
+    declare id: CreationOptional<string>
+    declare userId: string
+    declare venueId: string
+    declare role: Role
+    declare version: CreationOptional<number>
+    declare createdAt: CreationOptional<Date>
+    declare updatedAt: CreationOptional<Date>
+    declare user?: NonAttribute<UserModel>
+  }
+  MembershipModel.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      userId: { type: DataTypes.UUID, allowNull: false },
+      venueId: { type: DataTypes.UUID, allowNull: false },
+      role: { type: DataTypes.TEXT, allowNull: false },
+      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: 'memberships' },
+  )
+  return MembershipModel
+}
+export type MembershipModel = InstanceType<ReturnType<typeof defineMembershipModel>>

@@ -1,0 +1,4 @@
+export * from './decimal.js'
+export * from './factors.js'
+export * from './systems.js'
+export * from './rounding.js'

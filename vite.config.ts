@@ -1,0 +1,50 @@
+import { fileURLToPath, URL } from 'node:url'
+import { defineConfig } from 'vitest/config'
+import vue from '@vitejs/plugin-vue'
+import vuetify from 'vite-plugin-vuetify'
+
+const clientPlugins = () => [vue(), vuetify({ autoImport: true })]
+const alias = { '@': fileURLToPath(new URL('./src', import.meta.url)) }
+
+export default defineConfig({
+  plugins: clientPlugins(),
+  resolve: { alias },
+  build: { outDir: 'dist', emptyOutDir: true, chunkSizeWarningLimit: 1500 },
+  server: { proxy: { '/api': 'http://127.0.0.1:3000' } },
+  test: {
+    // One throwaway PostgreSQL cluster for the whole run; each API test file gets its own database.
+    globalSetup: ['tests/support/postgres.global.ts'],
+    projects: [
+      { test: { name: 'unit', environment: 'node', include: ['tests/unit/**/*.test.ts'] } },
+      {
+        test: {
+          name: 'api',
+          environment: 'node',
+          include: ['tests/api/**/*.test.ts'],
+          testTimeout: 20000,
+          hookTimeout: 30000,
+        },
+      },
+      {
+        plugins: clientPlugins(),
+        resolve: { alias },
+        test: {
+          name: 'components',
+          environment: 'jsdom',
+          include: ['tests/components/**/*.test.ts'],
+          setupFiles: ['tests/support/dom.setup.ts'],
+          server: { deps: { inline: ['vuetify'] } },
+        },
+      },
+      {
+        test: {
+          name: 'e2e',
+          environment: 'node',
+          include: ['tests/e2e/**/*.test.ts'],
+          testTimeout: 60000,
+          hookTimeout: 120000,
+        },
+      },
+    ],
+  },
+})

@@ -4,7 +4,7 @@ import vuetify from './vuetify'
 import router from '../router'
 import { whenSignedOut } from '../api/client'
 import { signInFor } from '../router/guard'
-import { useSessionStore } from '../stores/session'
+import { forgetSignedInData } from '../stores/forget'
 
 /** Registers vuetify, pinia and the router, and decides what a lapsed session does. */
 export function registerPlugins(app: App) {
@@ -12,7 +12,7 @@ export function registerPlugins(app: App) {
   app.use(vuetify).use(pinia).use(router)
 
   whenSignedOut(() => {
-    useSessionStore(pinia).clear()
+    forgetSignedInData(pinia)
     const here = router.currentRoute.value
     if (here.name !== 'session-sign-in') void router.push(signInFor(here.fullPath))
   })

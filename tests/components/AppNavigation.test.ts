@@ -1,0 +1,40 @@
+import { afterEach, describe, expect, it } from 'vitest'
+import { defineComponent, h } from 'vue'
+import { mount, type VueWrapper } from '@vue/test-utils'
+import { createPinia, setActivePinia } from 'pinia'
+import { createVuetify } from 'vuetify'
+import { VApp } from 'vuetify/components'
+import { createMemoryHistory, createRouter } from 'vue-router'
+import type { Role } from '../../shared/schemas/index.js'
+import AppNavigation from '../../src/components/AppNavigation.vue'
+import { routes } from '../../src/router/routes'
+import { useSessionStore } from '../../src/stores/session'
+import { personWith } from './fixtures'
+
+let wrapper: VueWrapper | undefined
+afterEach(() => wrapper?.unmount())
+
+async function navigationFor(role: Role) {
+  const pinia = createPinia()
+  setActivePinia(pinia)
+  useSessionStore().user = personWith(role)
+  const router = createRouter({ history: createMemoryHistory(), routes })
+  await router.push('/bricks')
+  const Shell = defineComponent(() => () => h(VApp, () => h(AppNavigation)))
+  wrapper = mount(Shell, { attachTo: document.body, global: { plugins: [pinia, createVuetify(), router] } })
+  return wrapper.findAll('[data-testid^="nav-"]').map((item) => item.attributes('data-testid'))
+}
+
+describe('AppNavigation', () => {
+  it('when a stage manager is signed in, then only the lineset and brick pages are offered', async () => {
+    expect(await navigationFor('stage-manager')).toEqual(['nav-linesets', 'nav-bricks'])
+  })
+
+  it('when a technical director is signed in, then venue settings are offered but people are not', async () => {
+    expect(await navigationFor('technical-director')).toEqual(['nav-linesets', 'nav-bricks', 'nav-venue-settings'])
+  })
+
+  it('when an administrator is signed in, then every page is offered', async () => {
+    expect(await navigationFor('administrator')).toEqual(['nav-linesets', 'nav-bricks', 'nav-people', 'nav-venue-settings'])
+  })
+})

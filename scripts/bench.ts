@@ -3,11 +3,14 @@ import { calculate } from '../shared/engine/index.js'
 import { planBricks } from '../shared/engine/brick-plan.js'
 import { calculationInputSchema } from '../shared/schemas/calculation.js'
 
+/** Figures as a crew types them: two decimal places at most. */
+const round2 = (value: number) => Math.round(value * 100) / 100
+
 function batten(length: number, lines: number, items: number) {
   const pickPoints = Array.from({ length: lines }, (_, k) => (k * length) / (lines - 1))
   const hung = Array.from({ length: items }, (_, k) =>
     k % 5 === 4
-      ? { label: `cable ${k}`, weightPerLength: 0.5 + (k % 3), from: (k * 0.37) % (length / 2), to: length / 2 + ((k * 0.41) % (length / 2)) }
+      ? { label: `cable ${k}`, weightPerLength: 0.5 + (k % 3), from: round2((k * 0.37) % (length / 2)), to: round2(length / 2 + ((k * 0.41) % (length / 2))) }
       : { label: `fixture ${k}`, weight: 12 + (k % 7) * 3.5, at: Math.round(((k * 7.3) % length) * 100) / 100 },
   )
   return calculationInputSchema.parse({

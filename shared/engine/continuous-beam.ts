@@ -1,7 +1,7 @@
 import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
 import type { BattenModel } from './batten-model.js'
-import { regionSums, threeMomentTerms } from './region-sums.js'
+import { regionMoments, regionSums, threeMomentTerms } from './region-sums.js'
 
 /** Line loads and the bending moments over the lines (sagging positive). */
 export interface BeamSolution {
@@ -25,8 +25,8 @@ export interface BeamSolution {
  */
 export function solveContinuousBeam(model: BattenModel): BeamSolution {
   const n = model.supports.length
-  const start = regionSums(model.startOverhang)
-  const end = regionSums(model.endOverhang)
+  const start = regionSums(regionMoments(model.startOverhang))
+  const end = regionSums(regionMoments(model.endOverhang))
   const moments: Decimal[] = new Array(n).fill(Dec(0))
   moments[0] = start.moment.neg()
   moments[n - 1] = end.moment.neg()
@@ -35,8 +35,9 @@ export function solveContinuousBeam(model: BattenModel): BeamSolution {
     const supportMoment = moments[0]!.abs().gte(moments[n - 1]!.abs()) ? moments[0]! : moments[n - 1]!
     return { reactions: [reaction], supportMoments: [supportMoment], spanStartShear: [], unbalancedMoment: end.moment.minus(start.moment) }
   }
-  const spanSums = model.spans.map(regionSums)
-  const terms = model.spans.map(threeMomentTerms)
+  const spanMoments = model.spans.map(regionMoments)
+  const spanSums = spanMoments.map(regionSums)
+  const terms = model.spans.map((span, k) => threeMomentTerms(span.length, spanMoments[k]!))
   solveInteriorMoments(model, terms, moments)
   const reactions = model.direct.map((d) => d)
   reactions[0] = reactions[0]!.plus(start.weight)

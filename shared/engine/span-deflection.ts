@@ -25,9 +25,13 @@ export class SpanShape {
   endSlopes(): { start: Decimal; end: Decimal } {
     const L = this.span.length
     let slope = this.startMoment.times(L).plus(this.startShear.times(L).times(L).div(2))
-    for (const { u, weight } of this.span.points) slope = slope.minus(weight.times(L.minus(u).pow(2)).div(2))
+    for (const { u, weight } of this.span.points) { const d = L.minus(u); slope = slope.minus(weight.times(d.times(d)).div(2)) }
     for (const { u1, u2, weightPerLength: w } of this.span.spreads)
-      slope = slope.minus(w.times(L.minus(u1).pow(3).minus(L.minus(u2).pow(3))).div(6))
+    {
+      const a = L.minus(u1)
+      const b = L.minus(u2)
+      slope = slope.minus(w.times(a.times(a).times(a).minus(b.times(b).times(b))).div(6))
+    }
     return { start: this.constant, end: slope.plus(this.constant) }
   }
 
@@ -52,15 +56,20 @@ export class SpanShape {
   private withoutConstant(u: Decimal): Decimal {
     const u2 = u.times(u)
     let value = this.startMoment.times(u2).div(2).plus(this.startShear.times(u2).times(u).div(6))
+    let pointSum = Dec(0)
+    let spreadSum = Dec(0)
     for (const point of this.span.points) {
-      if (point.u.lt(u)) value = value.minus(point.weight.times(u.minus(point.u).pow(3)).div(6))
+      if (!point.u.lt(u)) continue
+      const d = u.minus(point.u)
+      pointSum = pointSum.plus(point.weight.times(d.times(d).times(d)))
     }
     for (const { u1, u2: end, weightPerLength: w } of this.span.spreads) {
       if (u1.gte(u)) continue
-      const past = end.lt(u) ? u.minus(end).pow(4) : Dec(0)
-      value = value.minus(w.times(u.minus(u1).pow(4).minus(past)).div(24))
+      const a = u.minus(u1).times(u.minus(u1))
+      const b = end.lt(u) ? u.minus(end).times(u.minus(end)) : Dec(0)
+      spreadSum = spreadSum.plus(w.times(a.times(a).minus(b.times(b))))
     }
-    return value
+    return value.minus(pointSum.div(6)).minus(spreadSum.div(24))
   }
 
   private floatShape(): (u: number) => number {

@@ -19,7 +19,7 @@ type Candidate = { magnitude: number; span: number; u: number | Decimal } | { ma
  * peakMoment(model, solveContinuousBeam(model)) // { value: -12.5, at: 10 }
  */
 export function peakMoment(model: BattenModel, solution: BeamSolution): PeakMoment {
-  let best: Candidate = { magnitude: -1, line: 0 }
+  let best = { magnitude: -1, line: 0 } as Candidate
   solution.supportMoments.forEach((m, line) => {
     if (Math.abs(m.toNumber()) > best.magnitude) best = { magnitude: Math.abs(m.toNumber()), line }
   })

@@ -1,0 +1,41 @@
+import { lusolve } from 'mathjs'
+
+export interface FloatLoads {
+  length: number
+  pickPoints: number[]
+  points: Array<{ at: number; weight: number }>
+  spreads: Array<{ from: number; to: number; weightPerLength: number }>
+}
+
+/**
+ * An independent solve in floating point: the batten as a free beam with unknown line reactions and
+ * rigid-body terms C1 + C2·x (Macaulay's method over the whole length); deflection zero at every
+ * line, plus vertical and moment equilibrium, solved with mathjs lusolve.
+ */
+export function floatReactions(loads: FloatLoads): number[] {
+  const xs = loads.pickPoints
+  const n = xs.length
+  const ramp = (x: number, a: number, power: number) => (x > a ? (x - a) ** power : 0)
+  const loadShape = (x: number) => {
+    let value = 0
+    for (const p of loads.points) value -= (p.weight * ramp(x, p.at, 3)) / 6
+    for (const s of loads.spreads) value -= (s.weightPerLength * (ramp(x, s.from, 4) - ramp(x, s.to, 4))) / 24
+    return value
+  }
+  const matrix: number[][] = []
+  const rhs: number[] = []
+  xs.forEach((x) => {
+    matrix.push([...xs.map((xj) => ramp(x, xj, 3) / 6), 1, x])
+    rhs.push(-loadShape(x))
+  })
+  const weight = loads.points.reduce((s, p) => s + p.weight, 0) + loads.spreads.reduce((s, d) => s + d.weightPerLength * (d.to - d.from), 0)
+  const moment =
+    loads.points.reduce((s, p) => s + p.weight * p.at, 0) +
+    loads.spreads.reduce((s, d) => s + (d.weightPerLength * (d.to ** 2 - d.from ** 2)) / 2, 0)
+  matrix.push([...xs.map(() => 1), 0, 0])
+  rhs.push(weight)
+  matrix.push([...xs, 0, 0])
+  rhs.push(moment)
+  const solution = lusolve(matrix, rhs) as number[][]
+  return solution.slice(0, n).map((row) => row[0]!)
+}

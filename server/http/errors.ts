@@ -55,7 +55,8 @@ function toAppError(error: unknown): AppError {
 export function errorHandler(log: (error: unknown) => void): ErrorRequestHandler {
   return (error, _req, res, _next) => {
     const appError = toAppError(error)
-    if (appError.status >= 500) log(error)
+    if (appError.status === 500) log(error)
+    else if (appError.status === 503) console.warn(`loftledger: database unavailable (${(error as Error)?.message ?? error})`)
     const body: ErrorBody = { error: { code: appError.code, message: appError.message } }
     if (appError.fields) body.error.fields = appError.fields
     if (res.headersSent) return

@@ -60,9 +60,9 @@ export class Client {
 }
 
 /** A client already signed in as `email`. */
-export async function signedIn(baseUrl: string, email: string) {
+export async function signedIn(baseUrl: string, email: string, password = PASSWORD) {
   const client = new Client(baseUrl)
-  const res = await client.signIn(email)
+  const res = await client.signIn(email, password)
   if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`)
   return client
 }

@@ -1,0 +1,45 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { runCalculation } from '../../shared/engine/calculate.js'
+import { seedVenue } from '../support/fixtures.js'
+import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+
+let app: TestApp
+let flyOperator: Client
+
+beforeAll(async () => {
+  app = await startTestApp()
+  const venue = await seedVenue(app.handle.db, 'alpha')
+  flyOperator = await signedIn(app.url, venue.emails['fly-operator'])
+})
+afterAll(() => app.stop())
+
+// Two equal spans, uniform load: end lines 0.375 wL, middle 1.25 wL (AISC Steel Construction Manual,
+// beam diagrams and formulas, continuous beam of two equal spans, uniformly distributed load).
+const twoSpans = {
+  units: 'imperial',
+  kind: 'counterweight-single',
+  batten: { length: 40, weightPerLength: 0, pickPoints: [0, 20, 40] },
+  items: [{ label: 'drape', weightPerLength: 10, from: 0, to: 40 }],
+  arbor: { emptyWeight: 90, capacity: 2000, stackLength: 60 },
+  bricks: [{ name: 'full', weight: 20, thickness: 2, available: 80 }],
+  liftLine: { weightPerLength: 0.11, breakingStrength: 7000, designFactor: 8 },
+  tolerance: 10,
+}
+
+describe('POST /api/v1/calculations', () => {
+  it('when the input is valid, then it answers what the shared engine computes, line loads included', async () => {
+    const res = await flyOperator.post('/api/v1/calculations', twoSpans)
+    expect(res.status).toBe(200)
+    expect(res.body.lineLoads).toEqual([{ at: 0, load: 75 }, { at: 20, load: 250 }, { at: 40, load: 75 }])
+    expect(res.body.counterweight.ratio).toBe(1)
+    const local = runCalculation(twoSpans)
+    expect(local.ok && res.body).toEqual(local.ok ? JSON.parse(JSON.stringify(local.result)) : null)
+  })
+
+  it('when the input is invalid, then it answers 400 with the error shape naming the fields', async () => {
+    const res = await flyOperator.post('/api/v1/calculations', { ...twoSpans, units: 'furlongs', batten: { ...twoSpans.batten, pickPoints: [0, 50] } })
+    expect(res.status).toBe(400)
+    expect(res.body.error.code).toBe('validation_failed')
+    expect(Object.keys(res.body.error.fields)).toEqual(expect.arrayContaining(['units']))
+  })
+})

@@ -1,0 +1,84 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
+import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+
+let app: TestApp
+let venue: VenueFixture
+let td: Client
+
+beforeAll(async () => {
+  app = await startTestApp()
+  venue = await seedVenue(app.handle.db, 'alpha')
+  td = await signedIn(app.url, venue.emails['technical-director'])
+})
+afterAll(() => app.stop())
+
+const snapshot = async () => ({
+  linesets: (await td.get('/api/v1/linesets')).body,
+  bricks: (await td.get('/api/v1/brick-types')).body,
+  events: await app.handle.db.models.LinesetEvent.count(),
+})
+
+describe('validation errors change nothing', () => {
+  it('when a new lineset has bad figures, then it answers 400 naming each field and stores nothing', async () => {
+    const before = await snapshot()
+    const res = await td.post('/api/v1/linesets', { ...sampleLineset(7), battenLength: -4, pickPoints: [0, 20, 10], kind: 'flying-carpet', name: '' })
+    expect(res.status).toBe(400)
+    expect(res.body.error.code).toBe('validation_failed')
+    expect(res.body.error.fields).toMatchObject({ battenLength: 'Must be more than zero', kind: 'Choose a kind of lineset', name: 'Must not be empty' })
+    expect(await snapshot()).toEqual(before)
+  })
+
+  it('when a lift line lies beyond the batten or out of order, then the message names that position', async () => {
+    const res = await td.post('/api/v1/linesets', sampleLineset(8, { pickPoints: [0, 30, 20, 45] }))
+    expect(res.status).toBe(400)
+    expect(res.body.error.fields).toEqual({ 'pickPoints.2': 'List positions in order, each once', 'pickPoints.3': 'Lies beyond the end of the batten' })
+  })
+
+  it('when a counterweight set has no arbor figures, then both are named', async () => {
+    const res = await td.post('/api/v1/linesets', sampleLineset(9, { arborEmptyWeight: null, arborCapacity: null }))
+    expect(res.status).toBe(400)
+    expect(Object.keys(res.body.error.fields)).toEqual(['arborEmptyWeight', 'arborCapacity'])
+  })
+
+  it('when an update is invalid, then the stored lineset and its ledger stay as they were', async () => {
+    const before = await snapshot()
+    const res = await td.put(`/api/v1/linesets/${venue.linesetId}`, { ...sampleLineset(1), number: 'one', version: 0 })
+    expect(res.status).toBe(400)
+    expect(res.body.error.fields.number).toBe('Enter a number')
+    expect(await snapshot()).toEqual(before)
+  })
+
+  it('when the body is not JSON, then it answers 400 with the error shape', async () => {
+    const res = await td.agent.post('/api/v1/linesets').set('X-CSRF-Token', td.csrfToken).set('content-type', 'application/json').send('{"number": 1,')
+    expect(res.status).toBe(400)
+    expect(res.body.error.code).toBe('malformed_json')
+  })
+
+  it('when a brick type has a fractional count, then it answers 400 and stores nothing', async () => {
+    const before = await snapshot()
+    const res = await td.post('/api/v1/brick-types', { name: 'Odd', material: 'Steel', unitWeight: 0, thickness: 2, quantityOwned: 2.5 })
+    expect(res.status).toBe(400)
+    expect(res.body.error.fields).toEqual({ unitWeight: 'Must be more than zero', quantityOwned: 'Must be a whole number' })
+    expect(await snapshot()).toEqual(before)
+  })
+})
+
+describe('stale updates are refused', () => {
+  it('when two people edit the same lineset, then the second save answers 409 and the first one stands', async () => {
+    const current = (await td.get(`/api/v1/linesets/${venue.linesetId}`).expect(200)).body
+    const first = await td.put(`/api/v1/linesets/${venue.linesetId}`, { ...sampleLineset(1, { name: 'First edit' }), version: current.version })
+    expect(first.status).toBe(200)
+    expect(first.body.version).toBe(current.version + 1)
+    const second = await td.put(`/api/v1/linesets/${venue.linesetId}`, { ...sampleLineset(1, { name: 'Second edit' }), version: current.version })
+    expect(second.status).toBe(409)
+    expect(second.body.error.code).toBe('stale_version')
+    expect((await td.get(`/api/v1/linesets/${venue.linesetId}`)).body.name).toBe('First edit')
+  })
+
+  it('when a number is already taken, then it answers 409 naming the number field', async () => {
+    const res = await td.post('/api/v1/linesets', sampleLineset(1))
+    expect(res.status).toBe(409)
+    expect(res.body.error.fields).toEqual({ number: 'Already in use' })
+  })
+})

@@ -4,10 +4,9 @@ import { mount, type VueWrapper } from '@vue/test-utils'
 import { createPinia, setActivePinia } from 'pinia'
 import { createVuetify } from 'vuetify'
 import { VApp } from 'vuetify/components'
-import { createMemoryHistory, createRouter } from 'vue-router'
 import type { Role } from '../../shared/schemas/index.js'
 import AppNavigation from '../../src/components/AppNavigation.vue'
-import { routes } from '../../src/router/routes'
+import { testRouter } from './router'
 import { useSessionStore } from '../../src/stores/session'
 import { personWith } from './fixtures'
 
@@ -18,7 +17,7 @@ async function navigationFor(role: Role) {
   const pinia = createPinia()
   setActivePinia(pinia)
   useSessionStore().user = personWith(role)
-  const router = createRouter({ history: createMemoryHistory(), routes })
+  const router = testRouter()
   await router.push('/bricks')
   const Shell = defineComponent(() => () => h(VApp, () => h(AppNavigation)))
   wrapper = mount(Shell, { attachTo: document.body, global: { plugins: [pinia, createVuetify(), router] } })

@@ -1,0 +1,89 @@
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
+import { flushPromises, type VueWrapper } from '@vue/test-utils'
+import { createPinia, setActivePinia } from 'pinia'
+import type { Role } from '../../shared/schemas/index.js'
+import { ApiError } from '../../src/api/errors'
+import { linesetsApi } from '../../src/api/linesets'
+import LinesetEditView from '../../src/views/LinesetEditView.vue'
+import { testRouter } from './router'
+import { useSessionStore } from '../../src/stores/session'
+import { useVenueStore } from '../../src/stores/venue'
+import { mountWithApp } from './mount'
+import { lineset, personWith, venue } from './fixtures'
+
+vi.mock('../../src/api/linesets', () => ({
+  linesetsApi: { list: vi.fn(), read: vi.fn(), create: vi.fn(), update: vi.fn(), remove: vi.fn() },
+}))
+
+let wrapper: VueWrapper | undefined
+beforeEach(() => vi.mocked(linesetsApi.read).mockResolvedValue(lineset()))
+afterEach(() => {
+  wrapper?.unmount()
+  vi.clearAllMocks()
+})
+
+async function openLineset(role: Role) {
+  const pinia = createPinia()
+  setActivePinia(pinia)
+  useSessionStore().user = personWith(role)
+  useVenueStore().venue = venue
+  const router = testRouter()
+  await router.push(`/linesets/${lineset().id}`)
+  wrapper = mountWithApp(LinesetEditView, { props: { id: lineset().id }, global: { plugins: [pinia, router] } })
+  await flushPromises()
+  return wrapper
+}
+
+const save = async (w: VueWrapper) => {
+  await w.get('[data-testid="lineset-form"]').trigger('submit')
+  await flushPromises()
+}
+
+describe('LinesetEditView', () => {
+  it('when a stage manager opens a lineset, then it reads as a detail page with no way to change or delete it', async () => {
+    const w = await openLineset('stage-manager')
+    expect(w.get('[data-testid="page-title"]').text()).toBe('Lineset 12 · Main drape')
+    expect(w.find('[data-testid="lineset-read-only"]').exists()).toBe(true)
+    for (const testid of ['lineset-save', 'lineset-delete', 'lineset-add-pick-point'])
+      expect(w.find(`[data-testid="${testid}"]`).exists(), testid).toBe(false)
+    expect(w.find('[data-testid="app-cautions"]').exists()).toBe(true)
+  })
+
+  it('when a technical director opens a lineset, then it can be saved but not deleted', async () => {
+    const w = await openLineset('technical-director')
+    expect(w.find('[data-testid="lineset-save"]').exists()).toBe(true)
+    expect(w.find('[data-testid="lineset-delete"]').exists()).toBe(false)
+  })
+
+  it('when the lineset is saved, then the version it was read at goes with it', async () => {
+    vi.mocked(linesetsApi.update).mockResolvedValue(lineset({ version: 4 }))
+    const w = await openLineset('administrator')
+    expect(w.find('[data-testid="lineset-delete"]').exists()).toBe(true)
+    await save(w)
+    const [id, body] = vi.mocked(linesetsApi.update).mock.calls[0] ?? []
+    expect(id).toBe(lineset().id)
+    expect(body).toMatchObject({ version: 3, number: 12, pickPoints: [5, 15, 25, 35] })
+  })
+
+  it('when someone else saved first, then the page says so and Reload brings the newer copy', async () => {
+    vi.mocked(linesetsApi.update).mockRejectedValue(new ApiError(409, 'stale_version', 'Changed by someone else'))
+    const w = await openLineset('technical-director')
+    await save(w)
+    expect(w.get('[data-testid="lineset-stale"]').text()).toContain('Someone else changed this lineset')
+    vi.mocked(linesetsApi.read).mockResolvedValue(lineset({ version: 5, name: 'Main drape (rehung)' }))
+    await w.get('[data-testid="lineset-reload"]').trigger('click')
+    await flushPromises()
+    expect(w.find('[data-testid="lineset-stale"]').exists()).toBe(false)
+    expect((w.get('[data-testid="lineset-field-name"] input').element as HTMLInputElement).value).toBe('Main drape (rehung)')
+  })
+
+  it('when the server refuses a field, then its message shows under that field', async () => {
+    vi.mocked(linesetsApi.update).mockRejectedValue(
+      new ApiError(400, 'validation_failed', 'Check this field: pickPoints.3', { 'pickPoints.3': 'Too near the batten end' }),
+    )
+    const w = await openLineset('technical-director')
+    await save(w)
+    expect(w.get('[data-testid="lineset-pick-point-3"]').find('.v-messages').text()).toBe('Too near the batten end')
+    expect(w.get('[data-testid="lineset-problem"]').text()).toBe('The server refused some fields; each one says why.')
+  })
+})

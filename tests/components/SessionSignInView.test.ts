@@ -1,0 +1,75 @@
+import { afterEach, describe, expect, it, vi } from 'vitest'
+import { flushPromises, type VueWrapper } from '@vue/test-utils'
+import { createPinia, setActivePinia } from 'pinia'
+import { ApiError } from '../../src/api/errors'
+import { sessionApi } from '../../src/api/session'
+import SessionSignInView from '../../src/views/SessionSignInView.vue'
+import { testRouter } from './router'
+import { useSessionStore } from '../../src/stores/session'
+import { mountWithApp } from './mount'
+import { personWith } from './fixtures'
+
+vi.mock('../../src/api/session', () => ({ sessionApi: { read: vi.fn(), signIn: vi.fn(), signOut: vi.fn() } }))
+
+let wrapper: VueWrapper | undefined
+afterEach(() => {
+  wrapper?.unmount()
+  vi.clearAllMocks()
+})
+
+async function openSignIn(redirect?: string) {
+  const pinia = createPinia()
+  setActivePinia(pinia)
+  const router = testRouter()
+  await router.push({ name: 'session-sign-in', query: redirect ? { redirect } : {} })
+  wrapper = mountWithApp(SessionSignInView, { global: { plugins: [pinia, router] } })
+  return { w: wrapper, router }
+}
+
+async function signIn(w: VueWrapper, email: string, password: string) {
+  await w.get('[data-testid="sign-in-email"] input').setValue(email)
+  await w.get('[data-testid="sign-in-password"] input').setValue(password)
+  await w.get('[data-testid="sign-in-form"]').trigger('submit')
+  await flushPromises()
+}
+
+describe('SessionSignInView', () => {
+  it('when the e-mail address is not one, then the form says so without asking the server', async () => {
+    const { w } = await openSignIn()
+    expect(w.text()).toContain('Loftledger')
+    await signIn(w, 'not-an-address', 'whatever')
+    expect(w.get('[data-testid="sign-in-email"]').find('.v-messages').text()).toBe('Enter a valid e-mail address')
+    expect(sessionApi.signIn).not.toHaveBeenCalled()
+  })
+
+  it('when the credentials are wrong, then a clear message shows and the password is cleared', async () => {
+    vi.mocked(sessionApi.signIn).mockRejectedValue(new ApiError(401, 'bad_credentials', 'Wrong e-mail or password'))
+    const { w } = await openSignIn()
+    await signIn(w, 'crew@example.test', 'not the password')
+    expect(w.get('[data-testid="sign-in-problem"]').text()).toBe('That e-mail address and password do not match an account here.')
+    expect((w.get('[data-testid="sign-in-password"] input').element as HTMLInputElement).value).toBe('')
+  })
+
+  it('when there were too many attempts, then the person is told to wait', async () => {
+    vi.mocked(sessionApi.signIn).mockRejectedValue(new ApiError(429, 'too_many_attempts', 'Slow down'))
+    const { w } = await openSignIn()
+    await signIn(w, 'crew@example.test', 'guess')
+    expect(w.get('[data-testid="sign-in-problem"]').text()).toContain('Too many attempts')
+  })
+
+  it('when sign-in succeeds, then the new token is kept and the person returns to the page they asked for', async () => {
+    vi.mocked(sessionApi.signIn).mockResolvedValue({ user: personWith('fly-operator'), csrfToken: 'fresh-token' })
+    const { w, router } = await openSignIn('/bricks')
+    await signIn(w, ' Crew@Example.test ', 'correct horse battery')
+    expect(sessionApi.signIn).toHaveBeenCalledWith({ email: 'crew@example.test', password: 'correct horse battery' })
+    expect(useSessionStore().user?.role).toBe('fly-operator')
+    expect(router.currentRoute.value.fullPath).toBe('/bricks')
+  })
+
+  it('when the redirect points at another site, then the person lands on the linesets instead', async () => {
+    vi.mocked(sessionApi.signIn).mockResolvedValue({ user: personWith('fly-operator'), csrfToken: 'fresh-token' })
+    const { w, router } = await openSignIn('//elsewhere.example/steal')
+    await signIn(w, 'crew@example.test', 'correct horse battery')
+    expect(router.currentRoute.value.name).toBe('linesets-list')
+  })
+})

@@ -54,19 +54,18 @@ export function balanceCounterweight(request: CounterweightRequest): Counterweig
     checks.push(check('arbor-over-capacity', 'danger', `The arbor needs ${weight(required)} of bricks but takes only ${weight(room)} more (capacity ${weight(arbor.capacity)}${aboard.isZero() ? '' : `, ${weight(aboard)} of pipe weight already aboard`})`))
   if (required.lt(0) && outOfBalance.abs().gt(tolerance))
     checks.push(check('arbor-heavy-empty', 'danger', `Even with no bricks the arbor side is ${weight(outOfBalance.neg())} heavier than the batten side at the batten; add weight to the batten or lighten the arbor before the set moves`))
-  else if (outOfBalance.gt(tolerance)) checks.push(shortfallCheck(request, required, room, stackRoom, outOfBalance, weight))
+  else if (outOfBalance.gt(tolerance)) checks.push(shortfallCheck(request, required, room, stackRoom, plan, outOfBalance, weight))
   if (request.ropeLockHolding !== undefined && outOfBalance.abs().gt(request.ropeLockHolding))
     checks.push(check('beyond-rope-lock', 'caution', `Out of balance by ${weight(outOfBalance)}, more than the rope lock's holding figure of ${weight(request.ropeLockHolding)}; the lock is not a brake`))
   return { required, plan, arborSide, outOfBalance, checks }
 }
 
 /** Why the plan falls short: the stock, the stack or the capacity (danger), or only the brick sizes (caution). */
-function shortfallCheck(request: CounterweightRequest, required: Decimal, room: Decimal, stackRoom: Decimal, outOfBalance: Decimal, weight: (v: Decimal.Value) => string): Check {
+function shortfallCheck(request: CounterweightRequest, required: Decimal, room: Decimal, stackRoom: Decimal, plan: BrickPlan, outOfBalance: Decimal, weight: (v: Decimal.Value) => string): Check {
   const unlimited = request.bricks.map((b) => ({ ...b, available: Dec(required).div(b.weight).ceil().toNumber() + 1 }))
   const relaxed = planBricks(unlimited, required, Dec(10).pow(12))
-  const relaxedGap = request.battenSide.times(request.ratio).minus(Dec(request.arbor.emptyWeight)).minus(request.pipeWeightAboard ?? 0).minus(relaxed.loaded).div(request.ratio)
   const heavy = `the set stays ${weight(outOfBalance)} batten heavy, beyond the tolerance of ${weight(request.tolerance)}`
-  if (relaxedGap.gt(request.tolerance)) return check('out-of-balance', 'caution', `The brick sizes cannot come closer: ${heavy}`)
+  if (!plan.loaded.lt(relaxed.loaded)) return check('out-of-balance', 'caution', `The brick sizes cannot come closer: ${heavy}`)
   const cause = required.gt(room) ? 'the arbor capacity' : relaxed.stackUsed.gt(stackRoom) ? `the stack length (${formatQuantity(stackRoom, 'shortLength', request.units)} free)` : 'the bricks in stock'
-  return check('counterweight-short', 'danger', `The arbor needs ${weight(required)} of bricks but ${cause} allows only ${weight(required.minus(outOfBalance.times(request.ratio)))}: ${heavy}`)
+  return check('counterweight-short', 'danger', `The arbor needs ${weight(required)} of bricks but ${cause} allows only ${weight(plan.loaded)}: ${heavy}`)
 }

@@ -42,7 +42,8 @@ describe('calculate', () => {
     const input = { ...SAMPLE_INPUT, kind: 'counterweight-double', arbor: { emptyWeight: 90, capacity: 5000, stackLength: 600 }, bricks: [{ name: 'full', weight: 20, thickness: 2, available: 300 }], trims: { in: 4, out: 52 } }
     const result = run(input)
     expect(result.counterweight).toMatchObject({ ratio: 2, required: 2 * 1208.8 - 90, loaded: 2320, outOfBalance: 3.8 })
-    expect(result.travel).toMatchObject({ batten: 48, arbor: 24, shift: 39.6 } // 1.5 · 5 lines · 0.11 lb/ft · 48 ft)
+    // 1.5 · 5 lines · 0.11 lb/ft · 48 ft = 39.6 lb
+    expect(result.travel).toMatchObject({ batten: 48, arbor: 24, shift: 39.6 })
   })
 
   it('when lift lines travel, then the shift is 2·n·w·d single and 1.5·n·w·d double purchase (derived, TRADE.md)', () => {

@@ -1,4 +1,8 @@
 import type { Sequelize } from 'sequelize'
+import { defineAttachmentModel } from '../modules/attachments/attachment.model.js'
+import { defineHangItemModel } from '../modules/hangs/hang-item.model.js'
+import { defineHangModel } from '../modules/hangs/hang.model.js'
+import { defineWeightChangeTicketModel } from '../modules/tickets/weight-change-ticket.model.js'
 import { defineBrickTypeModel } from '../modules/brick-types/brick-type.model.js'
 import { defineLinesetEventModel } from '../modules/ledger/lineset-event.model.js'
 import { defineLinesetModel } from '../modules/linesets/lineset.model.js'
@@ -15,9 +19,15 @@ export function defineModels(sequelize: Sequelize) {
     Lineset: defineLinesetModel(sequelize),
     BrickType: defineBrickTypeModel(sequelize),
     LinesetEvent: defineLinesetEventModel(sequelize),
+    Hang: defineHangModel(sequelize),
+    HangItem: defineHangItemModel(sequelize),
+    WeightChangeTicket: defineWeightChangeTicketModel(sequelize),
+    Attachment: defineAttachmentModel(sequelize),
   }
   models.Membership.belongsTo(models.User, { foreignKey: 'userId', as: 'user' })
   models.User.hasMany(models.Membership, { foreignKey: 'userId', as: 'memberships' })
+  models.Hang.hasMany(models.HangItem, { foreignKey: 'hangId', as: 'items' })
+  models.Lineset.hasMany(models.Hang, { foreignKey: 'linesetId', as: 'hangs' })
   return models
 }
 

@@ -35,8 +35,8 @@ describe('venue isolation', () => {
       alphaAdmin.put(`/api/v1/people/${beta.membershipIds['stage-manager']}`, { role: 'administrator', version: 0 }),
       alphaAdmin.delete(`/api/v1/people/${beta.membershipIds['stage-manager']}`),
     ]
-    for (const res of await Promise.all(attempts)) {
-      expect(res.status, `${res.req.method} ${res.req.path}`).toBe(404)
+    for (const [index, res] of (await Promise.all(attempts)).entries()) {
+      expect(res.status, `attempt ${index}`).toBe(404)
       expect(res.body.error.code).toBe('not_found')
     }
     const betaAdmin = await signedIn(app.url, beta.emails.administrator)

@@ -1,0 +1,44 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import type { UnitSystem } from '../../../shared/units/systems.js'
+
+export const HANG_STATES = ['draft', 'awaiting-approval', 'approved', 'loaded', 'struck'] as const
+export type HangState = (typeof HANG_STATES)[number]
+
+/** What hangs on one lineset for a show, with the engine's input and answer as saved by the server. */
+export function defineHangModel(sequelize: Sequelize) {
+  class HangModel extends Model<InferAttributes<HangModel>, InferCreationAttributes<HangModel>> {
+    declare id: CreationOptional<string>
+    declare venueId: string
+    declare linesetId: string
+    declare title: string
+    declare showName: CreationOptional<string>
+    declare state: CreationOptional<HangState>
+    declare createdBy: string | null
+    /** The unit system the stored calculation was made in. */
+    declare unitSystem: UnitSystem
+    declare calculationInput: Record<string, unknown> | null
+    declare calculationResult: Record<string, unknown> | null
+    declare version: CreationOptional<number>
+    declare createdAt: CreationOptional<Date>
+    declare updatedAt: CreationOptional<Date>
+  }
+  HangModel.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      venueId: { type: DataTypes.UUID, allowNull: false },
+      linesetId: { type: DataTypes.UUID, allowNull: false },
+      title: { type: DataTypes.TEXT, allowNull: false },
+      showName: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+      state: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'draft' },
+      createdBy: { type: DataTypes.UUID, allowNull: true },
+      unitSystem: { type: DataTypes.TEXT, allowNull: false },
+      calculationInput: { type: DataTypes.JSONB, allowNull: true },
+      calculationResult: { type: DataTypes.JSONB, allowNull: true },
+      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: 'hangs' },
+  )
+  return HangModel
+}

@@ -21,5 +21,6 @@ export const battenLoads: fc.Arbitrary<FloatLoads> = fc
       ),
     })
   })
+  .map((loads) => ({ ...loads, pickPoints: [...loads.pickPoints] }))
   .filter((loads) => loads.pickPoints.length >= 2)
 

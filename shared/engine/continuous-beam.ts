@@ -1,7 +1,7 @@
 import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
 import type { BattenModel } from './batten-model.js'
-import { regionMoments, regionSums, threeMomentTerms } from './region-sums.js'
+import { regionMoments, regionSums, threeMomentTerms, type RegionMoments } from './region-sums.js'
 
 /** Line loads and the bending moments over the lines (sagging positive). */
 export interface BeamSolution {
@@ -9,6 +9,8 @@ export interface BeamSolution {
   supportMoments: Decimal[]
   /** Shear just right of each span's left line (upward positive). */
   spanStartShear: Decimal[]
+  /** Load moments of each span about its left line (reused for deflections). */
+  spanMoments: RegionMoments[]
   /** With one line: the unbalanced moment of all loads about it (positive turns the far end down). */
   unbalancedMoment: Decimal
 }
@@ -33,7 +35,7 @@ export function solveContinuousBeam(model: BattenModel): BeamSolution {
   if (n === 1) {
     const reaction = start.weight.plus(end.weight).plus(model.direct[0]!)
     const supportMoment = moments[0]!.abs().gte(moments[n - 1]!.abs()) ? moments[0]! : moments[n - 1]!
-    return { reactions: [reaction], supportMoments: [supportMoment], spanStartShear: [], unbalancedMoment: end.moment.minus(start.moment) }
+    return { reactions: [reaction], supportMoments: [supportMoment], spanStartShear: [], spanMoments: [], unbalancedMoment: end.moment.minus(start.moment) }
   }
   const spanMoments = model.spans.map(regionMoments)
   const spanSums = spanMoments.map(regionSums)
@@ -49,7 +51,7 @@ export function solveContinuousBeam(model: BattenModel): BeamSolution {
     reactions[k + 1] = reactions[k + 1]!.plus(weight.minus(left))
     return left
   })
-  return { reactions, supportMoments: moments, spanStartShear, unbalancedMoment: Dec(0) }
+  return { reactions, supportMoments: moments, spanStartShear, spanMoments, unbalancedMoment: Dec(0) }
 }
 
 /** Thomas algorithm on M(k-1)·L(k) + 2·M(k)·(L(k) + L(k+1)) + M(k+1)·L(k+1) = -(terms). */

@@ -18,7 +18,7 @@ export interface DeflectionFigures {
  * battenDeflections(model, solveContinuousBeam(model)).spans[0]!.drop
  */
 export function battenDeflections(model: BattenModel, solution: BeamSolution): DeflectionFigures {
-  const shapes = model.spans.map((span, k) => new SpanShape(span, solution.supportMoments[k]!, solution.spanStartShear[k]!))
+  const shapes = model.spans.map((span, k) => new SpanShape(span, solution.supportMoments[k]!, solution.spanStartShear[k]!, solution.spanMoments[k]!))
   const spans = shapes.map((shape, k) => {
     const origin = model.supports[k]!
     const u = shape.largestAt()

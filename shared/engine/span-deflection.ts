@@ -1,6 +1,7 @@
 import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
 import type { Region } from './batten-model.js'
+import type { RegionMoments } from './region-sums.js'
 
 /**
  * The deflected shape of one span between two lines, as EI·y (up positive) in the input's
@@ -12,8 +13,15 @@ export class SpanShape {
     private readonly span: Region,
     private readonly startMoment: Decimal,
     private readonly startShear: Decimal,
+    private readonly moments: RegionMoments,
   ) {
-    this.constant = this.withoutConstant(span.length).div(span.length).neg()
+    // At u = L every load is to the left: Σ P(L − u)³/6 = (L³m0 − 3L²m1 + 3Lm2 − m3)/6 over the load moments.
+    const L = span.length
+    const L2 = L.times(L)
+    const { m0, m1, m2, m3 } = moments
+    const loads = L2.times(L).times(m0).minus(L2.times(m1).times(3)).plus(L.times(m2).times(3)).minus(m3).div(6)
+    const atEnd = startMoment.times(L2).div(2).plus(startShear.times(L2).times(L).div(6)).minus(loads)
+    this.constant = atEnd.div(L).neg()
   }
 
   /** EI·y at u (decimal). */
@@ -23,15 +31,11 @@ export class SpanShape {
 
   /** EI·dy/du at u = 0 and u = L. */
   endSlopes(): { start: Decimal; end: Decimal } {
+    // Σ P(L − u)²/2 = (L²m0 − 2Lm1 + m2)/2 over the load moments.
     const L = this.span.length
-    let slope = this.startMoment.times(L).plus(this.startShear.times(L).times(L).div(2))
-    for (const { u, weight } of this.span.points) { const d = L.minus(u); slope = slope.minus(weight.times(d.times(d)).div(2)) }
-    for (const { u1, u2, weightPerLength: w } of this.span.spreads)
-    {
-      const a = L.minus(u1)
-      const b = L.minus(u2)
-      slope = slope.minus(w.times(a.times(a).times(a).minus(b.times(b).times(b))).div(6))
-    }
+    const { m0, m1, m2 } = this.moments
+    const loads = L.times(L).times(m0).minus(L.times(m1).times(2)).plus(m2).div(2)
+    const slope = this.startMoment.times(L).plus(this.startShear.times(L).times(L).div(2)).minus(loads)
     return { start: this.constant, end: slope.plus(this.constant) }
   }
 
@@ -44,7 +48,7 @@ export class SpanShape {
     let low = ((bestIndex - 1) * L) / 16
     let high = ((bestIndex + 1) * L) / 16
     const ratio = (Math.sqrt(5) - 1) / 2
-    for (let i = 0; i < 48; i++) {
+    for (let i = 0; i < 32; i++) {
       const a = high - ratio * (high - low)
       const b = low + ratio * (high - low)
       if (Math.abs(f(a)) >= Math.abs(f(b))) high = b
@@ -76,13 +80,25 @@ export class SpanShape {
     const m0 = this.startMoment.toNumber()
     const v0 = this.startShear.toNumber()
     const c = this.constant.toNumber()
-    const points = this.span.points.map((p) => [p.u.toNumber(), p.weight.toNumber()] as const)
-    const spreads = this.span.spreads.map((s) => [s.u1.toNumber(), s.u2.toNumber(), s.weightPerLength.toNumber()] as const)
+    const at = Float64Array.from(this.span.points, (p) => p.u.toNumber())
+    const weight = Float64Array.from(this.span.points, (p) => p.weight.toNumber())
+    const starts = Float64Array.from(this.span.spreads, (s) => s.u1.toNumber())
+    const ends = Float64Array.from(this.span.spreads, (s) => s.u2.toNumber())
+    const intensity = Float64Array.from(this.span.spreads, (s) => s.weightPerLength.toNumber())
     return (u) => {
-      let value = (m0 * u * u) / 2 + (v0 * u * u * u) / 6 + c * u
-      for (const [a, p] of points) if (a < u) value -= (p * (u - a) ** 3) / 6
-      for (const [a, b, w] of spreads) if (a < u) value -= (w * ((u - a) ** 4 - (b < u ? (u - b) ** 4 : 0))) / 24
-      return value
+      let points = 0
+      for (let i = 0; i < at.length; i++) {
+        const d = u - at[i]!
+        if (d > 0) points += weight[i]! * d * d * d
+      }
+      let spreads = 0
+      for (let i = 0; i < starts.length; i++) {
+        const a = u - starts[i]!
+        if (a <= 0) continue
+        const b = u - ends[i]!
+        spreads += intensity[i]! * (a * a * a * a - (b > 0 ? b * b * b * b : 0))
+      }
+      return (m0 * u * u) / 2 + (v0 * u * u * u) / 6 + c * u - points / 6 - spreads / 24
     }
   }
 }

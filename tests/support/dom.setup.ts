@@ -13,9 +13,16 @@ if (!window.visualViewport) {
   })
 }
 
-window.matchMedia ??= (query: string) =>
+/** Answers width queries against the window's width, the only media feature Vuetify asks about. */
+function matchesWidth(query: string) {
+  const min = /min-width:\s*([\d.]+)px/.exec(query)
+  const max = /max-width:\s*([\d.]+)px/.exec(query)
+  return (!min || window.innerWidth >= Number(min[1])) && (!max || window.innerWidth <= Number(max[1]))
+}
+
+window.matchMedia = (query: string) =>
   ({
-    matches: false,
+    matches: matchesWidth(query),
     media: query,
     onchange: null,
     addEventListener() {},

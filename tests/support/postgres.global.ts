@@ -1,7 +1,10 @@
-// One throwaway PostgreSQL cluster for the whole test run, and a migrated template database that each
-// API test file clones into a database of its own (so files run in parallel without sharing rows).
-import type { TestProject } from 'vitest/node'
+// A throwaway PostgreSQL cluster of this test run's own (so parallel runs on one machine never touch each
+// other's data), and a migrated template database that each API test file clones into a database of its own.
+import { rmSync } from 'node:fs'
+import { createServer } from 'node:net'
+import type { AddressInfo } from 'node:net'
 import pg from 'pg'
+import type { TestProject } from 'vitest/node'
 import { connectDatabase } from '../../server/db/connection.js'
 import { migrate } from '../../server/db/migrate.js'
 import { startCluster, stopCluster } from '../../scripts/lib/postgres.js'
@@ -13,12 +16,22 @@ declare module 'vitest' {
   }
 }
 
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer()
+    probe.once('error', reject)
+    probe.listen(0, '127.0.0.1', () => {
+      const { port } = probe.address() as AddressInfo
+      probe.close(() => resolve(port))
+    })
+  })
+}
+
 export default async function setup(project: TestProject) {
-  const { cluster, started } = startCluster({ name: 'postgres-test', port: Number(process.env.LOFTLEDGER_TEST_PG_PORT ?? 54339), fast: true })
-  const template = `loftledger_template_${process.pid}`
+  const { cluster } = startCluster({ name: `postgres-test-${process.pid}`, port: await freePort(), fast: true })
+  const template = 'loftledger_template'
   const admin = new pg.Client({ connectionString: cluster.adminUrl })
   await admin.connect()
-  await admin.query(`DROP DATABASE IF EXISTS ${template}`)
   await admin.query(`CREATE DATABASE ${template}`)
   await admin.end()
   const connections = connectDatabase(cluster.urlFor(template))
@@ -28,15 +41,8 @@ export default async function setup(project: TestProject) {
   project.provide('pgAdminUrl', cluster.adminUrl)
   project.provide('pgTemplateDatabase', template)
 
-  return async () => {
-    const cleanup = new pg.Client({ connectionString: cluster.adminUrl })
-    await cleanup.connect()
-    const { rows } = await cleanup.query<{ datname: string }>(
-      `SELECT datname FROM pg_database WHERE datname LIKE 'loftledger_test_%' OR datname = $1`,
-      [template],
-    )
-    for (const { datname } of rows) await cleanup.query(`DROP DATABASE IF EXISTS "${datname}" WITH (FORCE)`)
-    await cleanup.end()
-    if (started) stopCluster(cluster)
+  return () => {
+    stopCluster(cluster)
+    rmSync(cluster.root, { recursive: true, force: true })
   }
 }

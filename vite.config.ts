@@ -47,6 +47,8 @@ export default defineConfig({
           name: 'e2e',
           environment: 'node',
           include: ['tests/e2e/**/*.test.ts'],
+          // One at a time: they share the built client in dist/ and the machine's two cores.
+          fileParallelism: false,
           testTimeout: 60000,
           hookTimeout: 120000,
         },

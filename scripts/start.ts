@@ -34,7 +34,8 @@ async function main() {
   let cluster: Cluster | null = null
   if (!process.env.DATABASE_URL) {
     say('starting the private PostgreSQL cluster...')
-    cluster = startCluster({ name: 'postgres', port: Number(process.env.LOFTLEDGER_PG_PORT ?? 54329), password: true }).cluster
+    const name = process.env.LOFTLEDGER_CLUSTER ?? 'postgres'
+    cluster = startCluster({ name, port: Number(process.env.LOFTLEDGER_PG_PORT ?? 54329), password: true }).cluster
     await ensureDatabase(cluster.adminUrl, 'loftledger')
     process.env.DATABASE_URL = cluster.urlFor('loftledger')
     process.env.SESSION_SECRET ??= localSessionSecret(cluster.root)

@@ -1,30 +1,18 @@
 // A throwaway PostgreSQL cluster of this test run's own (so parallel runs on one machine never touch each
 // other's data), and a migrated template database that each API test file clones into a database of its own.
 import { rmSync } from 'node:fs'
-import { createServer } from 'node:net'
-import type { AddressInfo } from 'node:net'
 import pg from 'pg'
 import type { TestProject } from 'vitest/node'
 import { connectDatabase } from '../../server/db/connection.js'
 import { migrate } from '../../server/db/migrate.js'
 import { startCluster, stopCluster } from '../../scripts/lib/postgres.js'
+import { freePort } from './free-port.js'
 
 declare module 'vitest' {
   export interface ProvidedContext {
     pgAdminUrl: string
     pgTemplateDatabase: string
   }
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer()
-    probe.once('error', reject)
-    probe.listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as AddressInfo
-      probe.close(() => resolve(port))
-    })
-  })
 }
 
 export default async function setup(project: TestProject) {

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { runCalculation } from '../../shared/engine/calculate.js'
+import { BAD_CALCULATION_INPUTS } from '../support/bad-calculation-inputs.js'
 import { seedVenue } from '../support/fixtures.js'
 import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
 
@@ -41,5 +42,12 @@ describe('POST /api/v1/calculations', () => {
     expect(res.status).toBe(400)
     expect(res.body.error.code).toBe('validation_failed')
     expect(Object.keys(res.body.error.fields)).toEqual(expect.arrayContaining(['units']))
+  })
+
+  it.each(BAD_CALCULATION_INPUTS)('when the input has %s, then it answers 400 naming %s', async (_, raw, field) => {
+    const res = await flyOperator.post('/api/v1/calculations', raw as object)
+    expect(res.status).toBe(400)
+    expect(res.body.error.code).toBe('validation_failed')
+    expect(Object.keys(res.body.error.fields)).toContain(field)
   })
 })

@@ -2,19 +2,12 @@ import * as z from 'zod'
 import { UNIT_SYSTEMS } from '../units/index.js'
 import { PIPE_SIZE_KEYS } from '../engine/pipes.js'
 import { checkCalculationInput } from './calculation-rules.js'
+import { LINESET_KINDS } from './lineset.js'
 
 export type { CalculationResult } from './calculation-result.js'
 
-/** The kinds of lineset the engine balances. */
-export const LINESET_KINDS = [
-  'counterweight-single',
-  'counterweight-double',
-  'hemp-single',
-  'hemp-multi',
-  'spot-line',
-  'motorized',
-] as const
-export type LinesetKind = (typeof LINESET_KINDS)[number]
+// The engine balances every kind a lineset may be.
+export { LINESET_KINDS, type LinesetKind } from './lineset.js'
 
 /** The most items one batten may carry in a single calculation. */
 export const MAX_ITEMS = 1000

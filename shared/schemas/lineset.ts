@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import type { Quantity } from '../units/systems.js'
 import { nonNegative, optionalNonNegative, optionalPositive, positive, requiredText, versionField } from './quantity.js'
 
 /** Every kind of lineset a house may have; each is balanced and checked differently. */
@@ -90,3 +91,23 @@ export interface Lineset extends LinesetInput {
   version: number
   updatedAt: string
 }
+
+/** Which quantity each figure of a lineset is entered and stored in (pick points are lengths too). */
+export const LINESET_FIGURE_QUANTITIES = {
+  distanceFromPlasterLine: 'length',
+  battenLength: 'length',
+  pipeWeightPerLength: 'weightPerLength',
+  pipeMomentOfInertia: 'momentOfInertia',
+  pipeSectionModulus: 'sectionModulus',
+  liftLineWeightPerLength: 'weightPerLength',
+  liftLineBreakingStrength: 'weight',
+  arborEmptyWeight: 'weight',
+  arborCapacity: 'weight',
+  arborStackLength: 'shortLength',
+  ratedLoad: 'weight',
+  pipeWeight: 'weight',
+  travel: 'length',
+  sandbagWeight: 'weight',
+  hoistRatedCapacity: 'weight',
+  hoistSpeed: 'speed',
+} as const satisfies Record<string, Quantity>

@@ -1,27 +1,11 @@
 import type { LinesetInput, LinesetKind, LinesetStatus } from '../../shared/schemas/index.js'
-import { isCounterweightKind } from '../../shared/schemas/index.js'
-import { roundTo, type Quantity } from '../../shared/units/index.js'
+import { isCounterweightKind, LINESET_FIGURE_QUANTITIES } from '../../shared/schemas/index.js'
+import { roundTo, type Quantity, type UnitSystem } from '../../shared/units/index.js'
+import type { ExactFigures } from './exactFigures'
 import { isHempKind } from './linesetLabels'
 
 /** The figures of a lineset and the quantity each is entered in. */
-export const FIGURE_QUANTITIES = {
-  distanceFromPlasterLine: 'length',
-  battenLength: 'length',
-  pipeWeightPerLength: 'weightPerLength',
-  pipeMomentOfInertia: 'momentOfInertia',
-  pipeSectionModulus: 'sectionModulus',
-  liftLineWeightPerLength: 'weightPerLength',
-  liftLineBreakingStrength: 'weight',
-  arborEmptyWeight: 'weight',
-  arborCapacity: 'weight',
-  arborStackLength: 'shortLength',
-  ratedLoad: 'weight',
-  pipeWeight: 'weight',
-  travel: 'length',
-  sandbagWeight: 'weight',
-  hoistRatedCapacity: 'weight',
-  hoistSpeed: 'speed',
-} as const satisfies Record<string, Quantity>
+export const FIGURE_QUANTITIES = LINESET_FIGURE_QUANTITIES
 
 export type FigureKey = keyof typeof FIGURE_QUANTITIES
 const FIGURE_KEYS = Object.keys(FIGURE_QUANTITIES) as FigureKey[]
@@ -46,23 +30,25 @@ export function emptyDraft(): LinesetDraft {
   return { ...figures, number: '', name: '', kind: 'counterweight-single', status: 'in-service', pipeSize: '', pickPoints: [''], notes: '' }
 }
 
-export function draftFrom(lineset: LinesetInput): LinesetDraft {
-  const figures = Object.fromEntries(FIGURE_KEYS.map((key) => [key, asText(lineset[key])])) as Record<FigureKey, string>
+/** The draft for a saved lineset: figures rounded for the eye, their exact values remembered in `figures`. */
+export function draftFrom(lineset: LinesetInput, figures: ExactFigures, system: UnitSystem): LinesetDraft {
+  const show = (key: FigureKey | 'pickPoints', value: number | null | undefined) =>
+    value === null || value === undefined ? '' : figures.show(value, key === 'pickPoints' ? 'length' : FIGURE_QUANTITIES[key], system)
+  const texts = Object.fromEntries(FIGURE_KEYS.map((key) => [key, show(key, lineset[key])])) as Record<FigureKey, string>
   return {
-    ...figures,
+    ...texts,
     number: asText(lineset.number),
     name: lineset.name,
     kind: lineset.kind,
     status: lineset.status,
     pipeSize: lineset.pipeSize,
-    pickPoints: lineset.pickPoints.map(asText),
+    pickPoints: lineset.pickPoints.map((at) => show('pickPoints', at)),
     notes: lineset.notes ?? '',
   }
 }
 
 /** Blank text is "not entered": absent for a required figure (so the schema asks for it), null for an optional one. */
 const required = (text: string) => (text.trim() === '' ? undefined : Number(text))
-const optional = (text: string) => (text.trim() === '' ? null : Number(text))
 
 /** Fields each kind does not use; they are sent empty so a changed kind leaves nothing stale behind. */
 function unusedFigures(kind: LinesetKind): FigureKey[] {
@@ -74,24 +60,25 @@ function unusedFigures(kind: LinesetKind): FigureKey[] {
 }
 
 /** The request body the draft stands for; it is checked with the shared schema, never trusted. */
-export function bodyFrom(draft: LinesetDraft): Record<string, unknown> {
+export function bodyFrom(draft: LinesetDraft, figures: ExactFigures, system: UnitSystem): Record<string, unknown> {
   const unused = new Set(unusedFigures(draft.kind))
-  const figures = Object.fromEntries(
+  const figure = (key: FigureKey) => figures.read(draft[key], FIGURE_QUANTITIES[key], system)
+  const texts = Object.fromEntries(
     FIGURE_KEYS.filter((key) => !['battenLength', 'pipeWeightPerLength'].includes(key)).map((key) => [
       key,
-      unused.has(key) ? null : optional(draft[key]),
+      unused.has(key) ? null : (figure(key) ?? null),
     ]),
   )
   return {
-    ...figures,
+    ...texts,
     number: required(draft.number),
     name: draft.name,
     kind: draft.kind,
     status: draft.status,
-    battenLength: required(draft.battenLength),
+    battenLength: figure('battenLength'),
     pipeSize: draft.pipeSize,
-    pipeWeightPerLength: required(draft.pipeWeightPerLength),
-    pickPoints: draft.pickPoints.map(required),
+    pipeWeightPerLength: figure('pipeWeightPerLength'),
+    pickPoints: draft.pickPoints.map((text) => figures.read(text, 'length', system)),
     notes: draft.notes,
   }
 }

@@ -1,27 +1,9 @@
-import type { Lineset, LinesetInput } from '../../../shared/schemas/lineset.js'
+import { LINESET_FIGURE_QUANTITIES, type Lineset, type LinesetInput } from '../../../shared/schemas/lineset.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
-import { apiFromStored, storedFromApi, toApiFields, toStoredFields, type QuantityMap } from '../../db/quantities.js'
+import { apiFromStored, storedFromApi, toApiFields, toStoredFields } from '../../db/quantities.js'
 import type { LinesetModel } from './lineset.model.js'
 
-/** Which quantity each figure of a lineset is, for converting between the venue's units and SI. */
-export const LINESET_QUANTITIES = {
-  distanceFromPlasterLine: 'length',
-  battenLength: 'length',
-  pipeWeightPerLength: 'weightPerLength',
-  pipeMomentOfInertia: 'momentOfInertia',
-  pipeSectionModulus: 'sectionModulus',
-  liftLineWeightPerLength: 'weightPerLength',
-  liftLineBreakingStrength: 'weight',
-  arborEmptyWeight: 'weight',
-  arborCapacity: 'weight',
-  arborStackLength: 'shortLength',
-  ratedLoad: 'weight',
-  pipeWeight: 'weight',
-  travel: 'length',
-  sandbagWeight: 'weight',
-  hoistRatedCapacity: 'weight',
-  hoistSpeed: 'speed',
-} as const satisfies QuantityMap<string>
+const LINESET_QUANTITIES = LINESET_FIGURE_QUANTITIES
 
 type QuantityField = keyof typeof LINESET_QUANTITIES
 

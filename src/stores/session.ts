@@ -1,7 +1,7 @@
 import { defineStore } from 'pinia'
 import { computed, ref } from 'vue'
 import { canEditInventory, canManagePeople, type SessionUser, type SignIn } from '../../shared/schemas/index.js'
-import { setCsrfToken } from '../api/client'
+import { hasCsrfToken, setCsrfToken } from '../api/client'
 import { sessionApi } from '../api/session'
 
 /** Who is signed in, and what that person's role lets the screens offer. */
@@ -26,7 +26,9 @@ export const useSessionStore = defineStore('session', () => {
     accept(await sessionApi.read())
   }
 
+  /** Sign-in is a write too: after a sign-out the old token died with its session, so a fresh one is read first. */
   async function signIn(credentials: SignIn) {
+    if (!hasCsrfToken()) await load(true)
     accept(await sessionApi.signIn(credentials))
   }
 
@@ -38,10 +40,11 @@ export const useSessionStore = defineStore('session', () => {
     }
   }
 
-  /** Forgets the person locally; the next write fetches a fresh token after signing in again. */
+  /** Forgets the person locally; the session is read again (with a fresh token) before the next sign-in. */
   function clear() {
     user.value = null
     setCsrfToken('')
+    loaded.value = false
   }
 
   return { user, loaded, signedIn, role, canEdit, canManage, load, signIn, signOut, clear }

@@ -1,8 +1,9 @@
-import { afterEach, describe, expect, it, vi } from 'vitest'
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
 import { flushPromises, type VueWrapper } from '@vue/test-utils'
 import { createPinia, setActivePinia } from 'pinia'
 import { ApiError } from '../../src/api/errors'
 import { sessionApi } from '../../src/api/session'
+import { hasCsrfToken } from '../../src/api/client'
 import SessionSignInView from '../../src/views/SessionSignInView.vue'
 import { testRouter } from './router'
 import { useSessionStore } from '../../src/stores/session'
@@ -12,6 +13,7 @@ import { personWith } from './fixtures'
 vi.mock('../../src/api/session', () => ({ sessionApi: { read: vi.fn(), signIn: vi.fn(), signOut: vi.fn() } }))
 
 let wrapper: VueWrapper | undefined
+beforeEach(() => vi.mocked(sessionApi.read).mockResolvedValue({ user: null, csrfToken: 'token-before-sign-in' }))
 afterEach(() => {
   wrapper?.unmount()
   vi.clearAllMocks()
@@ -64,6 +66,20 @@ describe('SessionSignInView', () => {
     expect(sessionApi.signIn).toHaveBeenCalledWith({ email: 'crew@example.test', password: 'correct horse battery' })
     expect(useSessionStore().user?.role).toBe('fly-operator')
     expect(router.currentRoute.value.fullPath).toBe('/bricks')
+  })
+
+  it('when the person signed out before, then a fresh token is read first, so the next sign-in is not refused', async () => {
+    vi.mocked(sessionApi.signIn).mockResolvedValue({ user: personWith('stage-manager'), csrfToken: 'fresh-token' })
+    vi.mocked(sessionApi.signOut).mockResolvedValue(undefined)
+    const { w } = await openSignIn()
+    await signIn(w, 'crew@example.test', 'correct horse battery')
+    await useSessionStore().signOut()
+    expect(hasCsrfToken()).toBe(false)
+    vi.mocked(sessionApi.read).mockClear()
+    await useSessionStore().signIn({ email: 'crew@example.test', password: 'correct horse battery' })
+    expect(sessionApi.read).toHaveBeenCalledOnce()
+    expect(vi.mocked(sessionApi.read).mock.invocationCallOrder[0]).toBeLessThan(vi.mocked(sessionApi.signIn).mock.invocationCallOrder.at(-1) ?? 0)
+    expect(useSessionStore().user?.role).toBe('stage-manager')
   })
 
   it('when the redirect points at another site, then the person lands on the linesets instead', async () => {

@@ -21,7 +21,38 @@ afterEach(() => {
   whenSignedOut(() => {})
 })
 
+/** Answers each request in turn with the next of the given answers. */
+function answers(...replies: [number, unknown][]): AxiosAdapter {
+  return async (config) => {
+    const [status, data] = replies[Math.min(seen.length, replies.length - 1)] ?? [500, {}]
+    return answer(status, data)(config)
+  }
+}
+
 describe('api client', () => {
+  it('when the server refuses a stale CSRF token, then the current token is read and the write is sent once more', async () => {
+    api.defaults.adapter = answers(
+      [403, { error: { code: 'csrf_failed', message: 'Bad token' } }],
+      [200, { user: null, csrfToken: 'token-new' }],
+      [200, { saved: true }],
+    )
+    setCsrfToken('token-old')
+    const reply = await api.post('/session', { email: 'crew@example.test' })
+    expect(reply.data).toEqual({ saved: true })
+    expect(seen.map((config) => config.method)).toEqual(['post', 'get', 'post'])
+    expect(seen[2]?.headers.get('X-CSRF-Token')).toBe('token-new')
+  })
+
+  it('when the fresh token is refused as well, then the refusal reaches the screen instead of a loop', async () => {
+    api.defaults.adapter = answers(
+      [403, { error: { code: 'csrf_failed', message: 'Bad token' } }],
+      [200, { user: null, csrfToken: 'token-new' }],
+      [403, { error: { code: 'csrf_failed', message: 'Bad token' } }],
+    )
+    await expect(api.put('/venue', {})).rejects.toMatchObject({ code: 'csrf_failed' })
+    expect(seen).toHaveLength(3)
+  })
+
   it('when a write is sent, then it carries the latest CSRF token, and a read does not', async () => {
     api.defaults.adapter = answer(200, {})
     setCsrfToken('token-2')

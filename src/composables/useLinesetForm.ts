@@ -2,6 +2,8 @@ import { computed, inject, provide, reactive, ref, type InjectionKey } from 'vue
 import { linesetInputSchema, type LinesetInput } from '../../shared/schemas/index.js'
 import { fieldsFromIssues } from '../../shared/errors/fields.js'
 import { unitLabel, type UnitSystem } from '../../shared/units/index.js'
+import type { DecimalInput } from '../../shared/units/index.js'
+import { exactFigures } from './exactFigures'
 import { bodyFrom, draftFrom, emptyDraft, FIGURE_QUANTITIES, type DraftTextKey, type FigureKey } from './linesetDraft'
 
 interface Options {
@@ -15,12 +17,13 @@ interface Options {
  * A field's message shows once it has been left (or the form was submitted) and then follows every keystroke.
  */
 export function useLinesetForm(options: Options) {
-  const draft = reactive(options.initial ? draftFrom(options.initial) : emptyDraft())
+  const figures = exactFigures()
+  const draft = reactive(options.initial ? draftFrom(options.initial, figures, options.unitSystem()) : emptyDraft())
   const touched = reactive(new Set<string>())
   const submitted = ref(false)
   const serverFields = ref<Record<string, string>>({})
 
-  const verdict = computed(() => linesetInputSchema.safeParse(bodyFrom(draft)))
+  const verdict = computed(() => linesetInputSchema.safeParse(bodyFrom(draft, figures, options.unitSystem())))
   const clientFields = computed(() => (verdict.value.success ? {} : fieldsFromIssues(verdict.value.error.issues)))
 
   function messageFor(key: string): string | undefined {
@@ -37,6 +40,12 @@ export function useLinesetForm(options: Options) {
   }
 
   const unit = (key: FigureKey) => unitLabel(FIGURE_QUANTITIES[key], options.unitSystem())
+
+  /** Fills a figure from elsewhere (the pipe table), rounded for the eye and exact underneath. */
+  function fill(key: FigureKey, value: DecimalInput) {
+    draft[key] = figures.show(value, FIGURE_QUANTITIES[key], options.unitSystem())
+    edited(key)
+  }
 
   /** Bindings for a text or figure field: value, update, blur, message and read-only state. */
   function bind(key: DraftTextKey) {
@@ -76,7 +85,7 @@ export function useLinesetForm(options: Options) {
     return verdict.value.success ? verdict.value.data : null
   }
 
-  return { draft, touched, submitted, serverFields, clientFields, messageFor, edited, unit, bind, bindPickPoint, submit, readonly: options.readonly }
+  return { draft, touched, submitted, serverFields, clientFields, messageFor, edited, unit, fill, bind, bindPickPoint, submit, readonly: options.readonly }
 }
 
 export type LinesetForm = ReturnType<typeof useLinesetForm>

@@ -134,4 +134,27 @@ describe('LinesetForm', () => {
     expect(suffix('lineset-field-arborStackLength')).toBe('mm')
     expect(suffix('lineset-field-pipeMomentOfInertia')).toBe('mm⁴')
   })
+
+  it('when metric figures carry six decimals, then fields show crew-sized figures and an untouched field saves as read', async () => {
+    // 1200 lb and 48 ft as the API answers them in metric (NIST SP 811 factors, rounded to six places by the API).
+    const metricSet: LinesetInput = {
+      ...counterweightSet,
+      battenLength: 14.6304,
+      pickPoints: [1.2192, 4.2672, 7.3152, 10.3632],
+      pipeWeightPerLength: 4.047806,
+      pipeMomentOfInertia: 129031.74193,
+      pipeSectionModulus: 5342.182864,
+      arborCapacity: 635.029318,
+      ratedLoad: 544.310844,
+    }
+    const w = mountForm({ initial: metricSet, unitSystem: 'metric' })
+    const shown = (testid: string) => (input(w, testid).element as HTMLInputElement).value
+    expect(shown('lineset-field-ratedLoad')).toBe('544.31')
+    expect(shown('lineset-field-pipeMomentOfInertia')).toBe('129032')
+    expect(shown('lineset-pick-point-0')).toBe('1.219')
+    await input(w, 'lineset-field-arborCapacity').setValue('640')
+    await submit(w)
+    const [body] = w.emitted<[LinesetInput]>('submit')?.[0] ?? []
+    expect(body).toEqual({ ...metricSet, arborCapacity: 640 })
+  })
 })

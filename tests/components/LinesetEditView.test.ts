@@ -46,7 +46,9 @@ describe('LinesetEditView', () => {
     expect(w.find('[data-testid="lineset-read-only"]').exists()).toBe(true)
     for (const testid of ['lineset-save', 'lineset-delete', 'lineset-add-pick-point'])
       expect(w.find(`[data-testid="${testid}"]`).exists(), testid).toBe(false)
-    expect(w.find('[data-testid="app-cautions"]').exists()).toBe(true)
+    expect(w.findAll('[data-testid="app-caution"]').length).toBeGreaterThan(5)
+    expect(w.get('[data-testid="app-figures-disclaimer"]').text()).toContain('assist a qualified person')
+    expect(w.get('[data-testid="app-figures-disclaimer"]').text()).toContain('manufacturer’s ratings')
   })
 
   it('when a technical director opens a lineset, then it can be saved but not deleted', async () => {
@@ -58,7 +60,7 @@ describe('LinesetEditView', () => {
   it('when the lineset is saved, then the version it was read at goes with it', async () => {
     vi.mocked(linesetsApi.update).mockResolvedValue(lineset({ version: 4 }))
     const w = await openLineset('administrator')
-    expect(w.find('[data-testid="lineset-delete"]').exists()).toBe(true)
+    expect(w.get('[data-testid="lineset-delete"]').text()).toBe('Retire')
     await save(w)
     const [id, body] = vi.mocked(linesetsApi.update).mock.calls[0] ?? []
     expect(id).toBe(lineset().id)

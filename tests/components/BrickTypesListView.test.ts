@@ -38,7 +38,7 @@ describe('BrickTypesListView', () => {
     const w = await openBricks('fly-operator')
     const cells = w.findAll('[data-testid="brick-types-table"] tbody td').map((cell) => cell.text())
     // 19.5 lb x 1400 = 27,300 lb.
-    expect(cells).toEqual(['Full steel', 'Steel', '19.5 lb', '2 in', '1400', '27,300 lb'])
+    expect(cells).toEqual(['Full steel', 'Steel', '19.5 lb', '2 in', '1,400', '27,300 lb'])
     for (const testid of ['brick-types-add', 'brick-type-edit', 'brick-type-delete'])
       expect(w.find(`[data-testid="${testid}"]`).exists(), testid).toBe(false)
   })

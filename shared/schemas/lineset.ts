@@ -56,33 +56,44 @@ const linesetFields = z.object({
 
 type LinesetFields = z.infer<typeof linesetFields>
 
-/** Rules between fields: positions along the batten, and what each kind must have. */
-function checkLineset(value: LinesetFields, ctx: z.RefinementCtx) {
-  value.pickPoints.forEach((at, index) => {
-    const previous = value.pickPoints[index - 1]
-    if (at > value.battenLength)
+const isFiniteNumber = (value: unknown): value is number => typeof value === 'number' && Number.isFinite(value)
+
+/**
+ * Rules between fields: positions along the batten, and what each kind must have. They run even while
+ * other fields are wrong (see `whenObject`), so a form shows every problem at once; hence the type guards.
+ */
+function checkLineset(value: Partial<Record<keyof LinesetFields, unknown>>, ctx: z.RefinementCtx) {
+  const pickPoints = Array.isArray(value.pickPoints) ? (value.pickPoints as unknown[]) : []
+  const length = isFiniteNumber(value.battenLength) ? value.battenLength : undefined
+  pickPoints.forEach((at, index) => {
+    const previous = pickPoints[index - 1]
+    if (!isFiniteNumber(at)) return
+    if (length !== undefined && at > length)
       ctx.addIssue({ code: 'custom', path: ['pickPoints', index], message: 'Lies beyond the end of the batten' })
-    else if (previous !== undefined && at <= previous)
+    else if (isFiniteNumber(previous) && at <= previous)
       ctx.addIssue({ code: 'custom', path: ['pickPoints', index], message: 'List positions in order, each once' })
   })
   const require = (field: keyof LinesetFields, message: string) => {
     if (value[field] === null || value[field] === undefined) ctx.addIssue({ code: 'custom', path: [field], message })
   }
-  if (isCounterweightKind(value.kind)) {
+  if (value.kind === 'counterweight-single' || value.kind === 'counterweight-double') {
     require('arborEmptyWeight', 'A counterweight set needs its arbor empty weight')
     require('arborCapacity', 'A counterweight set needs its arbor capacity')
   }
   if (value.kind === 'motorized') require('hoistRatedCapacity', 'A motorized set needs its hoist rated capacity')
-  if (value.kind === 'hemp-single' && value.pickPoints.length !== 1)
+  if (value.kind === 'hemp-single' && pickPoints.length !== 1)
     ctx.addIssue({ code: 'custom', path: ['pickPoints'], message: 'A single-line hemp set has exactly one line' })
 }
 
+// Run the rules between fields whenever the body is an object, not only once every field is valid.
+const whenObject = { when: (payload: { value: unknown }) => typeof payload.value === 'object' && payload.value !== null }
+
 /** The lineset form and the body of `POST /api/v1/linesets`, figures in the venue's units. */
-export const linesetInputSchema = linesetFields.superRefine(checkLineset)
+export const linesetInputSchema = linesetFields.superRefine(checkLineset, whenObject)
 export type LinesetInput = z.infer<typeof linesetInputSchema>
 
 /** The body of `PUT /api/v1/linesets/:id`: the whole lineset plus the version it was read at. */
-export const linesetUpdateSchema = linesetFields.extend({ version: versionField() }).superRefine(checkLineset)
+export const linesetUpdateSchema = linesetFields.extend({ version: versionField() }).superRefine(checkLineset, whenObject)
 export type LinesetUpdate = z.infer<typeof linesetUpdateSchema>
 
 /** A lineset as the API returns it. */

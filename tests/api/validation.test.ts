@@ -82,3 +82,11 @@ describe('stale updates are refused', () => {
     expect(res.body.error.fields).toEqual({ number: 'Already in use' })
   })
 })
+
+describe('every problem is named at once', () => {
+  it('when one figure is unreadable and a lift line lies beyond the batten, then both fields are named', async () => {
+    const res = await td.post('/api/v1/linesets', { ...sampleLineset(10), travel: 'abc', battenLength: 48, pickPoints: [4, 14, 60] })
+    expect(res.status).toBe(400)
+    expect(res.body.error.fields).toEqual({ travel: 'Enter a number', 'pickPoints.2': 'Lies beyond the end of the batten' })
+  })
+})

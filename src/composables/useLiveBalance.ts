@@ -1,6 +1,7 @@
 import { computed, inject, provide, ref, toValue, type InjectionKey, type MaybeRefOrGetter } from 'vue'
 import type { BrickType, Lineset, Venue } from '../../shared/schemas/index.js'
-import type { CalculationInput, CalculationResult } from '../../shared/schemas/calculation.js'
+import { calculationInputSchema, type CalculationInput, type CalculationResult } from '../../shared/schemas/calculation.js'
+import { fieldsFromIssues } from '../../shared/errors/fields.js'
 import { runCalculation } from '../../shared/engine/calculate.js'
 import { linesetCalculationInput } from '../../shared/hang/lineset-calculation.js'
 import { emptyRow, isBlankRow, itemFrom, type BalanceRow } from './balanceRows'
@@ -51,11 +52,20 @@ export function useLiveBalance(sources: Sources) {
   /** Engine messages keyed by row id; `items.2.at` lands on the third counted row's position. */
   const rowMessages = computed(() => {
     const byRow: Record<number, RowMessages> = {}
-    for (const [path, message] of Object.entries(fields.value)) {
+    const place = (path: string, message: string, rows: readonly BalanceRow[]) => {
       const [head, index, key] = path.split('.')
-      const row = head === 'items' && index !== undefined ? counted.value[Number(index)] : undefined
+      const row = head === 'items' && index !== undefined ? rows[Number(index)] : undefined
       if (row) (byRow[row.id] ??= {})[key ?? 'row'] = message
     }
+    for (const [path, message] of Object.entries(fields.value)) place(path, message, counted.value)
+    // The schema leaves its cross-field rules (beyond the batten end) until every figure reads as a number, so
+    // each row is also checked alone: a stretch past the end shows while another row still holds a typo.
+    if (input.value && Object.keys(fields.value).length)
+      for (const row of counted.value) {
+        if (byRow[row.id]) continue
+        const alone = calculationInputSchema.safeParse({ ...input.value, items: [itemFrom(row)] })
+        if (!alone.success) for (const [path, message] of Object.entries(fieldsFromIssues(alone.error.issues))) place(path, message, [row])
+      }
     return byRow
   })
 

@@ -91,10 +91,25 @@ describe('LinesetBalancePanel', () => {
     await type(w, 'at', '20')
     expect(w.find('[data-testid="balance-line-loads"]').exists()).toBe(true)
     await type(w, 'at', '45')
-    expect(w.get('[data-testid="balance-row-0-at"]').find('.v-messages').text()).toBe("Item at 45 is beyond the batten's length of 40")
+    expect(w.get('[data-testid="balance-row-0-messages"]').text()).toBe("At: Item at 45 is beyond the batten's length of 40")
+    expect(w.get('[data-testid="balance-row-0-at"]').classes()).toContain('v-input--error')
     for (const figures of ['balance-line-loads', 'balance-counterweight', 'balance-checks', 'balance-totals'])
       expect(w.find(`[data-testid="${figures}"]`).exists(), figures).toBe(false)
     expect(w.find('[data-testid="balance-row-problem"]').exists()).toBe(true)
+  })
+
+  it('when two rows are wrong in different ways, then each row shows its own message at once', async () => {
+    const w = await openPanel(TWO_LINES)
+    await type(w, 'weight', 'abc')
+    await type(w, 'at', '12')
+    await w.get('[data-testid="balance-add-item"]').trigger('click')
+    await w.get('[data-testid="balance-row-1-kind-stretch"]').trigger('click')
+    await w.get('[data-testid="balance-row-1-weightPerLength"] input').setValue('8')
+    await w.get('[data-testid="balance-row-1-to"] input').setValue('60')
+    await flushPromises()
+    expect(w.get('[data-testid="balance-row-0-messages"]').text()).toBe('Weight: Item weight must be a finite number')
+    expect(w.get('[data-testid="balance-row-1-messages"]').text()).toBe("To: Span end at 60 is beyond the batten's length of 40")
+    expect(w.find('[data-testid="balance-line-loads"]').exists()).toBe(false)
   })
 
   it('when the set is hemp with a sandbag, then the haul force shows as the load less the sandbag', async () => {

@@ -6,7 +6,7 @@ import { solveContinuousBeam } from './continuous-beam.js'
 import { peakMoment, type PeakMoment } from './bending-moment.js'
 import { battenDeflections } from './deflection.js'
 import { resolvePipe, type PipeProperties } from './pipe-properties.js'
-import { bendingStress, deflectionFromEIy } from './structural-units.js'
+import { bendingStress, deflectionConverter } from './structural-units.js'
 
 /**
  * Allowable bending stress 0.66·Fy: the allowable-stress-design value for compact sections, common
@@ -93,7 +93,7 @@ function collectLoads(input: CalculationInput, selfWeightPerLength: Decimal) {
 }
 
 function toLengths(figures: ReturnType<typeof battenDeflections>, pipe: PipeProperties, units: UnitSystem) {
-  const length = (eiy: Decimal) => deflectionFromEIy(eiy, pipe.elasticModulus, pipe.momentOfInertia, units)
+  const length = deflectionConverter(pipe.elasticModulus, pipe.momentOfInertia, units)
   return {
     spans: figures.spans.map(({ from, to, drop, at }) => ({ from, to, max: length(drop), at })),
     overhangs: figures.overhangs.map(({ end, length: overhang, drop }) => ({ end, length: overhang, tip: length(drop) })),

@@ -45,10 +45,15 @@ export function analyseBatten(input: CalculationInput): BattenAnalysis {
   const pipe = resolvePipe(batten, units)
   const selfWeightPerLength = batten.weightPerLength === undefined ? pipe?.weightPerLength ?? Dec(0) : Dec(batten.weightPerLength)
   const loads = collectLoads(input, selfWeightPerLength)
+  // The model converts and totals the items in the same pass that places them.
   const model = buildBattenModel(loads.beam)
   const solution = solveContinuousBeam(model)
+  const { battenWeight, hardwareWeight } = loads
   const analysis: BattenAnalysis = {
-    ...loads.totals,
+    battenWeight,
+    hardwareWeight,
+    itemsWeight: model.itemsWeight,
+    totalLoad: battenWeight.plus(hardwareWeight).plus(model.itemsWeight),
     lineLoads: solution.reactions,
     peak: peakMoment(model, solution),
     unbalancedMoment: solution.unbalancedMoment,
@@ -66,29 +71,17 @@ export function analyseBatten(input: CalculationInput): BattenAnalysis {
 function collectLoads(input: CalculationInput, selfWeightPerLength: Decimal) {
   const { batten } = input
   const points: BattenLoads['points'] = []
-  const spreads: BattenLoads['spreads'] = [{ from: 0, to: batten.length, weightPerLength: selfWeightPerLength }]
-  let itemsWeight = Dec(0)
+  const spreads: BattenLoads['spreads'] = []
   for (const item of input.items) {
-    if (item.at !== undefined && item.weight !== undefined) {
-      points.push({ at: item.at, weight: item.weight })
-      itemsWeight = itemsWeight.plus(item.weight)
-    } else if (item.weightPerLength !== undefined) {
-      const from = item.from ?? 0
-      const to = item.to ?? batten.length
-      spreads.push({ from, to, weightPerLength: item.weightPerLength })
-      itemsWeight = itemsWeight.plus(Dec(item.weightPerLength).times(Dec(to).minus(from)))
-    }
+    if (item.at !== undefined && item.weight !== undefined) points.push({ at: item.at, weight: item.weight })
+    else if (item.weightPerLength !== undefined) spreads.push({ from: item.from ?? 0, to: item.to ?? batten.length, weightPerLength: item.weightPerLength })
   }
   const hardwareWeight = Dec(input.hardwareWeight ?? 0)
-  if (!hardwareWeight.isZero()) {
-    const share = hardwareWeight.div(batten.pickPoints.length)
-    for (const at of batten.pickPoints) points.push({ at, weight: share })
-  }
-  const battenWeight = selfWeightPerLength.times(batten.length)
-  const totalLoad = battenWeight.plus(hardwareWeight).plus(itemsWeight)
+  const atEachLine = hardwareWeight.isZero() ? undefined : hardwareWeight.div(batten.pickPoints.length)
   return {
-    beam: { length: batten.length, pickPoints: batten.pickPoints, points, spreads },
-    totals: { battenWeight, hardwareWeight, itemsWeight, totalLoad },
+    beam: { length: batten.length, pickPoints: batten.pickPoints, points, spreads, selfWeightPerLength, atEachLine },
+    hardwareWeight,
+    battenWeight: selfWeightPerLength.times(batten.length),
   }
 }
 

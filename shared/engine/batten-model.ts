@@ -1,16 +1,29 @@
 import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
+import { battenFrame, place, type BattenFrame, type RegionDraft } from './batten-frame.js'
+import { sumRegionLoads, totalSums, type LoadSums } from './region-loads.js'
+import { placeSpread } from './spread-placement.js'
+import { floatOf } from './decimal-float.js'
 
-/** A weight at a point, located within its region (see {@link Region}). */
-export interface LocalPoint { u: Decimal; weight: Decimal }
-/** A uniform weight per length from u1 to u2 within its region. */
-export interface LocalSpread { u1: Decimal; u2: Decimal; weightPerLength: Decimal }
+/**
+ * A weight at a point, located within its region (see {@link Region}). `float` holds the same
+ * figures as numbers for the floating-point searches (location only), converted once.
+ */
+export interface LocalPoint { u: Decimal; weight: Decimal; float: { u: number; weight: number } }
+/** A uniform weight per length from u1 to u2 within its region, with its float twin. */
+export interface LocalSpread {
+  u1: Decimal
+  u2: Decimal
+  weightPerLength: Decimal
+  float: { u1: number; u2: number; weightPerLength: number }
+}
 
 /**
  * A stretch of batten: a span between two lift lines (u measured from its left line)
- * or an overhang beyond an end line (u measured outward from that line).
+ * or an overhang beyond an end line (u measured outward from that line). Loads keep the
+ * input order (the float searches depend on it); `sums` holds them in order of position.
  */
-export interface Region { length: Decimal; points: LocalPoint[]; spreads: LocalSpread[] }
+export interface Region { length: Decimal; points: LocalPoint[]; spreads: LocalSpread[]; sums: LoadSums }
 
 /** What the beam analysis needs: lines, loads sorted into regions, totals. */
 export interface BattenModel {
@@ -21,6 +34,8 @@ export interface BattenModel {
   spans: Region[]
   startOverhang: Region
   endOverhang: Region
+  /** The total of `points` and `spreads` as given (not the batten's own weight or the hardware). */
+  itemsWeight: Decimal
 }
 
 /** Loads as the engine receives them, in the input's units. */
@@ -29,57 +44,85 @@ export interface BattenLoads {
   pickPoints: number[]
   points: Array<{ at: number; weight: Decimal.Value }>
   spreads: Array<{ from: number; to: number; weightPerLength: Decimal.Value }>
+  /** The batten's own weight per length, along its whole length. */
+  selfWeightPerLength?: Decimal.Value
+  /** Hardware hanging at every pick point, the same at each. */
+  atEachLine?: Decimal.Value
 }
 
-const emptyRegion = (length: Decimal): Region => ({ length, points: [], spreads: [] })
+const ZERO = Dec(0)
+/** A number's decimal parses back to the same number, so its float twin is the number itself. */
+const toFloat = (value: Decimal.Value, exact: Decimal) => (typeof value === 'number' ? value : floatOf(exact))
+
+/** One decimal per distinct figure in a calculation: a batten often carries many identical fixtures. */
+function decimals(): (value: Decimal.Value) => Decimal {
+  const made = new Map<number, Decimal>()
+  return (value) => {
+    if (typeof value !== 'number') return Dec(value)
+    let exact = made.get(value)
+    if (!exact) made.set(value, (exact = Dec(value)))
+    return exact
+  }
+}
 
 /**
- * Sorts every load into the region of the batten it acts on, splitting spread loads at the lines.
+ * Sorts every load into the region of the batten it acts on, splitting spread loads at the lines,
+ * converting each figure to a decimal once and totalling the items on the way.
  *
  * @example
  * buildBattenModel({ length: 20, pickPoints: [0, 10, 20], points: [{ at: 5, weight: 100 }], spreads: [] })
  *   .spans[0]!.points[0]!.u.toString() // '5'
  */
 export function buildBattenModel(loads: BattenLoads): BattenModel {
-  const xs = loads.pickPoints
-  const supports = xs.map((x) => Dec(x))
-  const last = xs.length - 1
-  const spans = supports.slice(1).map((x, k) => emptyRegion(x.minus(supports[k]!)))
-  const start = emptyRegion(supports[0]!)
-  const end = emptyRegion(Dec(loads.length).minus(supports[last]!))
-  const direct = supports.map(() => Dec(0))
+  const frame = battenFrame(loads.length, loads.pickPoints)
+  const decimal = decimals()
+  const direct = frame.supports.map(() => ZERO)
   for (const point of loads.points) {
-    const weight = Dec(point.weight)
-    const index = findRegion(xs, point.at)
-    if (index.line !== undefined) direct[index.line] = direct[index.line]!.plus(weight)
-    else if (index.span === -1) start.points.push({ u: supports[0]!.minus(point.at), weight })
-    else if (index.span === last) end.points.push({ u: Dec(point.at).minus(supports[last]!), weight })
-    else spans[index.span]!.points.push({ u: Dec(point.at).minus(supports[index.span]!), weight })
+    const weight = decimal(point.weight)
+    const where = place(frame, point.at)
+    if ('line' in where) direct[where.line] = direct[where.line]!.plus(weight)
+    else where.region.points.push({ u: where.u, weight, float: { u: where.float, weight: toFloat(point.weight, weight) } })
   }
+  // The batten's own weight goes first, as the float searches have always seen it.
+  if (loads.selfWeightPerLength !== undefined) {
+    const w = Dec(loads.selfWeightPerLength)
+    placeSpread(frame, 0, loads.length, w, toFloat(loads.selfWeightPerLength, w))
+  }
+  // The items' total, in exact sums: the points at lines now, those in regions from the region sums.
+  let itemsWeight = direct.reduce((sum, d) => sum.plus(d), ZERO)
   for (const spread of loads.spreads) {
-    const w = Dec(spread.weightPerLength)
-    const { from, to } = spread
-    if (from < xs[0]!) start.spreads.push({ u1: supports[0]!.minus(Math.min(to, xs[0]!)), u2: supports[0]!.minus(from), weightPerLength: w })
-    if (to > xs[last]!) end.spreads.push({ u1: Dec(Math.max(from, xs[last]!)).minus(supports[last]!), u2: Dec(to).minus(supports[last]!), weightPerLength: w })
-    for (let k = 0; k < last; k++) {
-      const left = Math.max(from, xs[k]!)
-      const right = Math.min(to, xs[k + 1]!)
-      if (right > left)
-        spans[k]!.spreads.push({ u1: Dec(left).minus(supports[k]!), u2: Dec(right).minus(supports[k]!), weightPerLength: w })
-    }
+    const w = decimal(spread.weightPerLength)
+    const { start, end } = placeSpread(frame, spread.from, spread.to, w, toFloat(spread.weightPerLength, w))
+    itemsWeight = itemsWeight.plus(w.times(end.x.minus(start.x)))
   }
-  return { length: Dec(loads.length), supports, direct, spans, startOverhang: start, endOverhang: end }
+  if (loads.atEachLine !== undefined) {
+    const share = Dec(loads.atEachLine)
+    direct.forEach((d, k) => (direct[k] = d.plus(share)))
+  }
+  const regions = sumRegions(frame)
+  for (const region of [regions.startOverhang, ...regions.spans, regions.endOverhang]) itemsWeight = itemsWeight.plus(totalSums(region.sums).points[0]!)
+  return { length: frame.length, supports: frame.supports, direct, ...regions, itemsWeight }
 }
 
-/** Which line a position sits on, or which span (-1 before the first line, last index after the last). */
-function findRegion(xs: number[], at: number): { line?: number; span: number } {
-  let low = 0
-  let high = xs.length - 1
-  while (low <= high) {
-    const mid = (low + high) >> 1
-    if (xs[mid] === at) return { line: mid, span: mid }
-    if (xs[mid]! < at) low = mid + 1
-    else high = mid - 1
+/**
+ * Running sums for every region, sweeping from x = 0: the intensity leaving one region, plus the
+ * edges on the line after it, is the intensity entering the next.
+ */
+function sumRegions(frame: BattenFrame): Pick<BattenModel, 'spans' | 'startOverhang' | 'endOverhang'> {
+  const finish = (region: RegionDraft, entering: Decimal, close: boolean) => {
+    const { sums, leaving } = sumRegionLoads(region.points, region.steps, entering, close ? region.length : undefined)
+    return { region: { length: region.length, points: region.points, spreads: region.spreads, sums }, leaving }
   }
-  return { span: high }
+  const across = (intensity: Decimal, line: number) =>
+    frame.lineEdges[line]!.reduce((sum, edge) => (edge.up ? sum.plus(edge.w) : sum.minus(edge.w)), intensity)
+  // Reaching line 0 from x = 0, the start overhang's steps (reversed, u runs outward) have built the intensity.
+  const before = frame.start.steps.reduce((sum, step) => (step.up ? sum.minus(step.w) : sum.plus(step.w)), ZERO)
+  const startOverhang = finish(frame.start, before, false).region
+  let intensity = across(before, 0)
+  const spans = frame.spans.map((span, k) => {
+    const done = finish(span, intensity, true)
+    intensity = across(done.leaving, k + 1)
+    return done.region
+  })
+  return { startOverhang, spans, endOverhang: finish(frame.end, intensity, false).region }
 }

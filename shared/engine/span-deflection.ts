@@ -2,6 +2,16 @@ import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
 import type { Region } from './batten-model.js'
 import type { RegionMoments } from './region-sums.js'
+import { sumsBefore, totalSums } from './region-loads.js'
+
+const TWO = Dec(2)
+const THREE = Dec(3)
+const FOUR = Dec(4)
+// x·0.5 and x·0.25 round the same real number as x/2 and x/4, at a fraction of a division's cost.
+const HALF = Dec('0.5')
+const QUARTER = Dec('0.25')
+const SIX = Dec(6)
+const TWENTY_FOUR = Dec(24)
 
 /**
  * The deflected shape of one span between two lines, as EI·y (up positive) in the input's
@@ -19,8 +29,8 @@ export class SpanShape {
     const L = span.length
     const L2 = L.times(L)
     const { m0, m1, m2, m3 } = moments
-    const loads = L2.times(L).times(m0).minus(L2.times(m1).times(3)).plus(L.times(m2).times(3)).minus(m3).div(6)
-    const atEnd = startMoment.times(L2).div(2).plus(startShear.times(L2).times(L).div(6)).minus(loads)
+    const loads = L2.times(L).times(m0).minus(L2.times(m1).times(THREE)).plus(L.times(m2).times(THREE)).minus(m3).div(SIX)
+    const atEnd = startMoment.times(L2).times(HALF).plus(startShear.times(L2).times(L).div(SIX)).minus(loads)
     this.constant = atEnd.div(L).neg()
   }
 
@@ -34,8 +44,8 @@ export class SpanShape {
     // Σ P(L − u)²/2 = (L²m0 − 2Lm1 + m2)/2 over the load moments.
     const L = this.span.length
     const { m0, m1, m2 } = this.moments
-    const loads = L.times(L).times(m0).minus(L.times(m1).times(2)).plus(m2).div(2)
-    const slope = this.startMoment.times(L).plus(this.startShear.times(L).times(L).div(2)).minus(loads)
+    const loads = L.times(L).times(m0).minus(L.times(m1).times(TWO)).plus(m2).times(HALF)
+    const slope = this.startMoment.times(L).plus(this.startShear.times(L).times(L).times(HALF)).minus(loads)
     return { start: this.constant, end: slope.plus(this.constant) }
   }
 
@@ -43,8 +53,11 @@ export class SpanShape {
   largestAt(): Decimal {
     const L = this.span.length.toNumber()
     const f = this.floatShape()
+    // f is pure: each sixteenth evaluated once picks the same sample as re-evaluating the best each time.
+    const samples = new Float64Array(16)
+    for (let j = 1; j < 16; j++) samples[j] = Math.abs(f((j * L) / 16))
     let bestIndex = 8
-    for (let j = 1; j < 16; j++) if (Math.abs(f((j * L) / 16)) > Math.abs(f((bestIndex * L) / 16))) bestIndex = j
+    for (let j = 1; j < 16; j++) if (samples[j]! > samples[bestIndex]!) bestIndex = j
     let low = ((bestIndex - 1) * L) / 16
     let high = ((bestIndex + 1) * L) / 16
     const ratio = (Math.sqrt(5) - 1) / 2
@@ -57,34 +70,32 @@ export class SpanShape {
     return Dec(((low + high) / 2).toFixed(6))
   }
 
+  /**
+   * EI·y at u without the C·u term: M0u²/2 + V0u³/6 − Σ P(u − a)³/6 − Σ Δw(u − t)⁴/24 over the loads
+   * left of u, both sums expanded in powers of u over the span's running sums (Horner's rule).
+   */
   private withoutConstant(u: Decimal): Decimal {
     const u2 = u.times(u)
-    let value = this.startMoment.times(u2).div(2).plus(this.startShear.times(u2).times(u).div(6))
-    let pointSum = Dec(0)
-    let spreadSum = Dec(0)
-    for (const point of this.span.points) {
-      if (!point.u.lt(u)) continue
-      const d = u.minus(point.u)
-      pointSum = pointSum.plus(point.weight.times(d.times(d).times(d)))
-    }
-    for (const { u1, u2: end, weightPerLength: w } of this.span.spreads) {
-      if (u1.gte(u)) continue
-      const a = u.minus(u1).times(u.minus(u1))
-      const b = end.lt(u) ? u.minus(end).times(u.minus(end)) : Dec(0)
-      spreadSum = spreadSum.plus(w.times(a.times(a).minus(b.times(b))))
-    }
-    return value.minus(pointSum.div(6)).minus(spreadSum.div(24))
+    const value = this.startMoment.times(u2).times(HALF).plus(this.startShear.times(u2).times(u).div(SIX))
+    const { points: p, steps: s } = sumsBefore(this.span.sums, u)
+    const pointSum = p[0]!.times(u).minus(p[1]!.times(THREE)).times(u).plus(p[2]!.times(THREE)).times(u).minus(p[3]!)
+    const spreadSum = s[0]!.times(u).minus(s[1]!.times(FOUR)).times(u).plus(s[2]!.times(SIX)).times(u).minus(s[3]!.times(FOUR)).times(u).plus(s[4]!)
+    return value.minus(pointSum.div(SIX)).minus(spreadSum.div(TWENTY_FOUR))
   }
 
   private floatShape(): (u: number) => number {
     const m0 = this.startMoment.toNumber()
     const v0 = this.startShear.toNumber()
     const c = this.constant.toNumber()
-    const at = Float64Array.from(this.span.points, (p) => p.u.toNumber())
-    const weight = Float64Array.from(this.span.points, (p) => p.weight.toNumber())
-    const starts = Float64Array.from(this.span.spreads, (s) => s.u1.toNumber())
-    const ends = Float64Array.from(this.span.spreads, (s) => s.u2.toNumber())
-    const intensity = Float64Array.from(this.span.spreads, (s) => s.weightPerLength.toNumber())
+    // Filled by plain loops: Float64Array.from with a map function is many times slower here.
+    const { points: pointLoads, spreads: spreadLoads } = this.span
+    const at = new Float64Array(pointLoads.length)
+    const weight = new Float64Array(pointLoads.length)
+    pointLoads.forEach((p, i) => ((at[i] = p.float.u), (weight[i] = p.float.weight)))
+    const starts = new Float64Array(spreadLoads.length)
+    const ends = new Float64Array(spreadLoads.length)
+    const intensity = new Float64Array(spreadLoads.length)
+    spreadLoads.forEach((s, i) => ((starts[i] = s.float.u1), (ends[i] = s.float.u2), (intensity[i] = s.float.weightPerLength)))
     return (u) => {
       let points = 0
       for (let i = 0; i < at.length; i++) {
@@ -105,19 +116,18 @@ export class SpanShape {
 
 /**
  * EI times the downward tip deflection of an overhang treated as a cantilever fixed at its line:
- * P·u²(3c - u)/6 for a point load at u, integrated for spread loads.
+ * P·u²(3c − u)/6 for a point load at u, integrated for spread loads, from the overhang's load sums:
+ * (3c·ΣP·u² − ΣP·u³ + c·Σw(u2³ − u1³) − Σw(u2⁴ − u1⁴)/4)/6.
  *
  * @example
- * cantileverTipDrop({ length: Dec(2), points: [{ u: Dec(2), weight: Dec(3) }], spreads: [] }).toString() // '8' (PL³/3)
+ * const model = buildBattenModel({ length: 12, pickPoints: [0, 10], points: [{ at: 12, weight: 3 }], spreads: [] })
+ * cantileverTipDrop(model.endOverhang).toString() // '8' (PL³/3)
  */
 export function cantileverTipDrop(region: Region): Decimal {
   const c = region.length
-  let drop = Dec(0)
-  for (const { u, weight } of region.points) drop = drop.plus(weight.times(u.times(u)).times(c.times(3).minus(u)).div(6))
-  for (const { u1, u2, weightPerLength: w } of region.spreads) {
-    const cubes = u2.pow(3).minus(u1.pow(3)).times(c)
-    const fourths = u2.pow(4).minus(u1.pow(4)).div(4)
-    drop = drop.plus(w.times(cubes.minus(fourths)).div(6))
-  }
-  return drop
+  const { points, steps } = totalSums(region.sums)
+  // The steps' sums are −Σ w·(u2ᵏ − u1ᵏ), hence the signs.
+  const pointPart = c.times(THREE).times(points[2]!).minus(points[3]!)
+  const spreadPart = steps[4]!.times(QUARTER).minus(c.times(steps[3]!))
+  return pointPart.plus(spreadPart).div(SIX)
 }

@@ -14,6 +14,10 @@ import { lineset, personWith, venue } from './fixtures'
 vi.mock('../../src/api/linesets', () => ({
   linesetsApi: { list: vi.fn(), read: vi.fn(), create: vi.fn(), update: vi.fn(), remove: vi.fn() },
 }))
+// The page's balance panel reads the venue's bricks; none are needed for these tests.
+vi.mock('../../src/api/brick-types', () => ({
+  brickTypesApi: { list: vi.fn(async () => []), create: vi.fn(), update: vi.fn(), remove: vi.fn() },
+}))
 
 let wrapper: VueWrapper | undefined
 beforeEach(() => vi.mocked(linesetsApi.read).mockResolvedValue(lineset()))
@@ -46,6 +50,8 @@ describe('LinesetEditView', () => {
     expect(w.find('[data-testid="lineset-read-only"]').exists()).toBe(true)
     for (const testid of ['lineset-save', 'lineset-delete', 'lineset-add-pick-point'])
       expect(w.find(`[data-testid="${testid}"]`).exists(), testid).toBe(false)
+    // Once: beside the balance panel's figures, not repeated below it.
+    expect(w.findAll('[data-testid="app-cautions"]')).toHaveLength(1)
     expect(w.findAll('[data-testid="app-caution"]').length).toBeGreaterThan(5)
     expect(w.get('[data-testid="app-figures-disclaimer"]').text()).toContain('assist a qualified person')
     expect(w.get('[data-testid="app-figures-disclaimer"]').text()).toContain('manufacturer’s ratings')

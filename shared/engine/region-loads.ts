@@ -17,11 +17,11 @@ export interface IntensityStep { at: Decimal; float: number; w: Decimal; up: boo
 export interface LoadSums {
   /** Point positions, ascending. */
   pointAt: Decimal[]
-  /** pointSums[i]: [ΣW, ΣW·a, ΣW·a², ΣW·a³] over the first i points (pointSums[0] is all zero). */
+  /** pointSums[k][i]: Σ W·aᵏ over the first i points, k = 0..3 (one column per power; row 0 is zero). */
   pointSums: Decimal[][]
   /** Distinct positions where the spread intensity steps, ascending. */
   stepAt: Decimal[]
-  /** stepSums[i]: [ΣΔw, ΣΔw·t, ΣΔw·t², ΣΔw·t³, ΣΔw·t⁴] over the first i steps; ΣΔw is the intensity after them. */
+  /** stepSums[k][i]: Σ Δw·tᵏ over the first i steps, k = 0..4; stepSums[0][i] is the intensity after them. */
   stepSums: Decimal[][]
 }
 
@@ -41,22 +41,23 @@ const byPosition = <T extends { at: Decimal; float: number }>(a: T, b: T) => a.f
  *
  * @example
  * const { sums } = sumRegionLoads([{ u: Dec(4), weight: Dec(5), float: { u: 4, weight: 5 } }], [], Dec(0))
- * sums.pointSums[1]![1]!.toString() // '20' (5 × 4)
+ * sums.pointSums[1]![1]!.toString() // '20' (Σ W·a after the first point: 5 × 4)
  */
 export function sumRegionLoads(points: readonly LocalPoint[], steps: readonly IntensityStep[], entering: Decimal, closeAt?: Decimal): { sums: LoadSums; leaving: Decimal } {
   const ordered = points.map((p) => ({ at: p.u, float: p.float.u, weight: p.weight })).sort(byPosition)
-  const pointSums = [[ZERO, ZERO, ZERO, ZERO]]
+  // Columns rather than a row per load: four decimals per load are all it allocates.
+  const pointSums: Decimal[][] = [[ZERO], [ZERO], [ZERO], [ZERO]]
   for (const { at, weight } of ordered) {
     const first = weight.times(at)
     const second = first.times(at)
-    pointSums.push(accumulate(pointSums[pointSums.length - 1]!, [weight, first, second, second.times(at)]))
+    extend(pointSums, [weight, first, second, second.times(at)])
   }
   const sorted = [{ at: ZERO, float: 0, w: entering, up: true }, ...steps].sort(byPosition)
   const stepAt: Decimal[] = []
-  const stepSums = [[ZERO, ZERO, ZERO, ZERO, ZERO]]
+  const stepSums: Decimal[][] = [[ZERO], [ZERO], [ZERO], [ZERO], [ZERO]]
   const addStep = (at: Decimal, rise: Decimal) => {
     stepAt.push(at)
-    stepSums.push(accumulate(stepSums[stepSums.length - 1]!, at.isZero() ? [rise, ZERO, ZERO, ZERO, ZERO] : powers(rise, at)))
+    extend(stepSums, at.isZero() ? [rise] : powers(rise, at))
   }
   for (let i = 0; i < sorted.length; ) {
     const { at } = sorted[i]!
@@ -65,7 +66,7 @@ export function sumRegionLoads(points: readonly LocalPoint[], steps: readonly In
     for (; i < sorted.length && (sorted[i]!.at === at || sorted[i]!.at.eq(at)); i++) rise = sorted[i]!.up ? rise.plus(sorted[i]!.w) : rise.minus(sorted[i]!.w)
     if (!rise.isZero()) addStep(at, rise)
   }
-  const leaving = stepSums[stepSums.length - 1]![0]!
+  const leaving = last(stepSums[0]!)
   if (closeAt && !leaving.isZero()) addStep(closeAt, leaving.neg())
   return { sums: { pointAt: ordered.map((p) => p.at), pointSums, stepAt, stepSums }, leaving }
 }
@@ -78,7 +79,9 @@ export function sumRegionLoads(points: readonly LocalPoint[], steps: readonly In
  * sumsBefore(sums, Dec(3)).points[0]!.toString() // total point weight before u = 3
  */
 export function sumsBefore(sums: LoadSums, u: Decimal): { points: Decimal[]; steps: Decimal[] } {
-  return { points: sums.pointSums[countBelow(sums.pointAt, u)]!, steps: sums.stepSums[countBelow(sums.stepAt, u)]! }
+  const i = countBelow(sums.pointAt, u)
+  const j = countBelow(sums.stepAt, u)
+  return { points: sums.pointSums.map((column) => column[i]!), steps: sums.stepSums.map((column) => column[j]!) }
 }
 
 /**
@@ -88,8 +91,10 @@ export function sumsBefore(sums: LoadSums, u: Decimal): { points: Decimal[]; ste
  * totalSums(sums).points[0]!.toString() // total point weight in the region
  */
 export function totalSums(sums: LoadSums): { points: Decimal[]; steps: Decimal[] } {
-  return { points: sums.pointSums[sums.pointSums.length - 1]!, steps: sums.stepSums[sums.stepSums.length - 1]! }
+  return { points: sums.pointSums.map(last), steps: sums.stepSums.map(last) }
 }
+
+const last = (column: readonly Decimal[]) => column[column.length - 1]!
 
 function powers(rise: Decimal, at: Decimal): Decimal[] {
   const first = rise.times(at)
@@ -98,8 +103,13 @@ function powers(rise: Decimal, at: Decimal): Decimal[] {
   return [rise, first, second, third, third.times(at)]
 }
 
-function accumulate(before: readonly Decimal[], terms: readonly Decimal[]): Decimal[] {
-  return terms.map((term, k) => (term === ZERO ? before[k]! : before[k]!.plus(term)))
+/** Appends each column's running total plus its new term (a missing term is zero: the total carries over). */
+function extend(columns: readonly Decimal[][], terms: readonly Decimal[]): void {
+  columns.forEach((column, k) => {
+    const total = last(column)
+    const term = terms[k]
+    column.push(term === undefined || term === ZERO ? total : total.plus(term))
+  })
 }
 
 function countBelow(ascending: readonly Decimal[], u: Decimal): number {

@@ -61,10 +61,16 @@ export class SpanShape {
     let low = ((bestIndex - 1) * L) / 16
     let high = ((bestIndex + 1) * L) / 16
     const ratio = (Math.sqrt(5) - 1) / 2
+    // A new probe often lands exactly on the last one kept: reuse its value rather than evaluate again.
+    let last = { u: NaN, size: 0 }, kept = last
+    const size = (u: number) => (u === last.u ? last.size : u === kept.u ? kept.size : Math.abs(f(u)))
     for (let i = 0; i < 32; i++) {
       const a = high - ratio * (high - low)
       const b = low + ratio * (high - low)
-      if (Math.abs(f(a)) >= Math.abs(f(b))) high = b
+      const atA = size(a)
+      const atB = size(b)
+      ;[last, kept] = [{ u: a, size: atA }, { u: b, size: atB }]
+      if (atA >= atB) high = b
       else low = a
     }
     return Dec(((low + high) / 2).toFixed(6))

@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import { uuidKey, requiredText, requiredUuid, optionalUuid } from '../../db/columns.js'
 
 /** An uploaded file (photo, drawing, inspection report); the bytes live in storage under `storageKey`. */
 export function defineAttachmentModel(sequelize: Sequelize) {
@@ -16,15 +17,15 @@ export function defineAttachmentModel(sequelize: Sequelize) {
   }
   AttachmentModel.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      venueId: { type: DataTypes.UUID, allowNull: false },
-      linesetId: { type: DataTypes.UUID, allowNull: true },
-      fileName: { type: DataTypes.TEXT, allowNull: false },
-      contentType: { type: DataTypes.TEXT, allowNull: false },
+      ...uuidKey(),
+      venueId: requiredUuid(),
+      linesetId: optionalUuid(),
+      fileName: requiredText(),
+      contentType: requiredText(),
       byteSize: { type: DataTypes.BIGINT, allowNull: false },
-      sha256: { type: DataTypes.TEXT, allowNull: false },
-      storageKey: { type: DataTypes.TEXT, allowNull: false },
-      uploadedBy: { type: DataTypes.UUID, allowNull: true },
+      sha256: requiredText(),
+      storageKey: requiredText(),
+      uploadedBy: optionalUuid(),
       createdAt: DataTypes.DATE,
     },
     { sequelize, tableName: 'attachments', updatedAt: false },

@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import { uuidKey, lockVersion, timestamps, requiredDecimal, requiredText, requiredUuid } from '../../db/columns.js'
 
 /** unitWeight in kg, thickness in m (SI decimal strings). */
 export function defineBrickTypeModel(sequelize: Sequelize) {
@@ -16,16 +17,15 @@ export function defineBrickTypeModel(sequelize: Sequelize) {
   }
   BrickTypeModel.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      venueId: { type: DataTypes.UUID, allowNull: false },
-      name: { type: DataTypes.TEXT, allowNull: false },
-      material: { type: DataTypes.TEXT, allowNull: false },
-      unitWeight: { type: DataTypes.DECIMAL, allowNull: false },
-      thickness: { type: DataTypes.DECIMAL, allowNull: false },
+      ...uuidKey(),
+      venueId: requiredUuid(),
+      name: requiredText(),
+      material: requiredText(),
+      unitWeight: requiredDecimal(),
+      thickness: requiredDecimal(),
       quantityOwned: { type: DataTypes.INTEGER, allowNull: false },
-      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      ...lockVersion(),
+      ...timestamps(),
     },
     { sequelize, tableName: 'brick_types' },
   )

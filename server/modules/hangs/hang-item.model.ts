@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import { uuidKey, optionalDecimal, requiredText, requiredUuid } from '../../db/columns.js'
 
 /** One thing on a hang: a point load (`weight` at `at`) or a spread load (`weightPerLength` from..to). SI strings. */
 export function defineHangItemModel(sequelize: Sequelize) {
@@ -13,18 +14,18 @@ export function defineHangItemModel(sequelize: Sequelize) {
     declare toPosition: string | null
     declare weightPerLength: string | null
   }
-  const quantity = () => ({ type: DataTypes.DECIMAL, allowNull: true })
+  const quantity = () => (optionalDecimal())
   HangItemModel.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      hangId: { type: DataTypes.UUID, allowNull: false },
+      ...uuidKey(),
+      hangId: requiredUuid(),
       position: { type: DataTypes.INTEGER, allowNull: false },
-      label: { type: DataTypes.TEXT, allowNull: false },
-      weight: quantity(),
-      at: quantity(),
-      fromPosition: quantity(),
-      toPosition: quantity(),
-      weightPerLength: quantity(),
+      label: requiredText(),
+      weight: optionalDecimal(),
+      at: optionalDecimal(),
+      fromPosition: optionalDecimal(),
+      toPosition: optionalDecimal(),
+      weightPerLength: optionalDecimal(),
     },
     { sequelize, tableName: 'hang_items', timestamps: false },
   )

@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import { uuidKey, lockVersion, timestamps, requiredText, requiredUuid, optionalUuid } from '../../db/columns.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 
 export const HANG_STATES = ['draft', 'awaiting-approval', 'approved', 'loaded', 'struck'] as const
@@ -24,19 +25,18 @@ export function defineHangModel(sequelize: Sequelize) {
   }
   HangModel.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      venueId: { type: DataTypes.UUID, allowNull: false },
-      linesetId: { type: DataTypes.UUID, allowNull: false },
-      title: { type: DataTypes.TEXT, allowNull: false },
+      ...uuidKey(),
+      venueId: requiredUuid(),
+      linesetId: requiredUuid(),
+      title: requiredText(),
       showName: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
       state: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'draft' },
-      createdBy: { type: DataTypes.UUID, allowNull: true },
-      unitSystem: { type: DataTypes.TEXT, allowNull: false },
+      createdBy: optionalUuid(),
+      unitSystem: requiredText(),
       calculationInput: { type: DataTypes.JSONB, allowNull: true },
       calculationResult: { type: DataTypes.JSONB, allowNull: true },
-      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      ...lockVersion(),
+      ...timestamps(),
     },
     { sequelize, tableName: 'hangs' },
   )

@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import { requiredText, requiredUuid, optionalUuid } from '../../db/columns.js'
 
 /** One entry in a lineset's append-only ledger (the database refuses updates and deletes). */
 export function defineLinesetEventModel(sequelize: Sequelize) {
@@ -14,11 +15,11 @@ export function defineLinesetEventModel(sequelize: Sequelize) {
   LinesetEventModel.init(
     {
       id: { type: DataTypes.BIGINT, primaryKey: true, autoIncrement: true },
-      venueId: { type: DataTypes.UUID, allowNull: false },
-      linesetId: { type: DataTypes.UUID, allowNull: false },
+      venueId: requiredUuid(),
+      linesetId: requiredUuid(),
       occurredAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-      actorId: { type: DataTypes.UUID, allowNull: true },
-      eventType: { type: DataTypes.TEXT, allowNull: false },
+      actorId: optionalUuid(),
+      eventType: requiredText(),
       payload: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
     },
     { sequelize, tableName: 'lineset_events', timestamps: false },

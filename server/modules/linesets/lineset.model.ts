@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import { uuidKey, lockVersion, timestamps, optionalDecimal, requiredDecimal, requiredText, requiredUuid } from '../../db/columns.js'
 import type { LinesetKind, LinesetStatus } from '../../../shared/schemas/lineset.js'
 
 /** Quantities are SI decimal strings (m, kg, kg/m, m^4, m^3, m/s); see lineset.mapper.ts. */
@@ -35,38 +36,37 @@ export function defineLinesetModel(sequelize: Sequelize) {
     declare updatedAt: CreationOptional<Date>
   }
   // A fresh object per attribute: Sequelize writes each attribute's column name into its definition.
-  const quantity = () => ({ type: DataTypes.DECIMAL, allowNull: true })
+  const quantity = () => (optionalDecimal())
   LinesetModel.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      venueId: { type: DataTypes.UUID, allowNull: false },
+      ...uuidKey(),
+      venueId: requiredUuid(),
       number: { type: DataTypes.INTEGER, allowNull: false },
-      name: { type: DataTypes.TEXT, allowNull: false },
-      kind: { type: DataTypes.TEXT, allowNull: false },
-      status: { type: DataTypes.TEXT, allowNull: false },
-      distanceFromPlasterLine: quantity(),
-      battenLength: { type: DataTypes.DECIMAL, allowNull: false },
-      pipeSize: { type: DataTypes.TEXT, allowNull: false },
-      pipeWeightPerLength: { type: DataTypes.DECIMAL, allowNull: false },
-      pipeMomentOfInertia: quantity(),
-      pipeSectionModulus: quantity(),
+      name: requiredText(),
+      kind: requiredText(),
+      status: requiredText(),
+      distanceFromPlasterLine: optionalDecimal(),
+      battenLength: requiredDecimal(),
+      pipeSize: requiredText(),
+      pipeWeightPerLength: requiredDecimal(),
+      pipeMomentOfInertia: optionalDecimal(),
+      pipeSectionModulus: optionalDecimal(),
       pickPoints: { type: DataTypes.ARRAY(DataTypes.DECIMAL), allowNull: false },
-      liftLineWeightPerLength: quantity(),
-      liftLineBreakingStrength: quantity(),
-      arborEmptyWeight: quantity(),
-      arborCapacity: quantity(),
-      arborStackLength: quantity(),
-      ratedLoad: quantity(),
-      pipeWeight: quantity(),
-      travel: quantity(),
-      sandbagWeight: quantity(),
-      hoistRatedCapacity: quantity(),
-      hoistSpeed: quantity(),
+      liftLineWeightPerLength: optionalDecimal(),
+      liftLineBreakingStrength: optionalDecimal(),
+      arborEmptyWeight: optionalDecimal(),
+      arborCapacity: optionalDecimal(),
+      arborStackLength: optionalDecimal(),
+      ratedLoad: optionalDecimal(),
+      pipeWeight: optionalDecimal(),
+      travel: optionalDecimal(),
+      sandbagWeight: optionalDecimal(),
+      hoistRatedCapacity: optionalDecimal(),
+      hoistSpeed: optionalDecimal(),
       notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
       retiredAt: { type: DataTypes.DATE, allowNull: true },
-      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      ...lockVersion(),
+      ...timestamps(),
     },
     { sequelize, tableName: 'linesets' },
   )

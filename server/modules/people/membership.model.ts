@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize'
+import { uuidKey, lockVersion, timestamps, requiredText, requiredUuid } from '../../db/columns.js'
 import type { Role } from '../../../shared/schemas/role.js'
 import type { UserModel } from './user.model.js'
 
@@ -16,13 +17,12 @@ export function defineMembershipModel(sequelize: Sequelize) {
   }
   MembershipModel.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      userId: { type: DataTypes.UUID, allowNull: false },
-      venueId: { type: DataTypes.UUID, allowNull: false },
-      role: { type: DataTypes.TEXT, allowNull: false },
-      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      ...uuidKey(),
+      userId: requiredUuid(),
+      venueId: requiredUuid(),
+      role: requiredText(),
+      ...lockVersion(),
+      ...timestamps(),
     },
     { sequelize, tableName: 'memberships' },
   )

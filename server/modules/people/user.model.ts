@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import { uuidKey, timestamps, requiredText } from '../../db/columns.js'
 
 export function defineUserModel(sequelize: Sequelize) {
   class UserModel extends Model<InferAttributes<UserModel>, InferCreationAttributes<UserModel>> {
@@ -11,12 +12,11 @@ export function defineUserModel(sequelize: Sequelize) {
   }
   UserModel.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      ...uuidKey(),
       email: { type: DataTypes.TEXT, allowNull: false, unique: true },
-      name: { type: DataTypes.TEXT, allowNull: false },
-      passwordHash: { type: DataTypes.TEXT, allowNull: false },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      name: requiredText(),
+      passwordHash: requiredText(),
+      ...timestamps(),
     },
     { sequelize, tableName: 'users' },
   )

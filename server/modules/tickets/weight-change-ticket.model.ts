@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import { uuidKey, lockVersion, timestamps, optionalDecimal, requiredUuid, optionalUuid } from '../../db/columns.js'
 
 export const TICKET_STATES = ['requested', 'approved', 'declined', 'loaded', 'withdrawn'] as const
 export type TicketState = (typeof TICKET_STATES)[number]
@@ -23,20 +24,19 @@ export function defineWeightChangeTicketModel(sequelize: Sequelize) {
   }
   WeightChangeTicketModel.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      venueId: { type: DataTypes.UUID, allowNull: false },
-      linesetId: { type: DataTypes.UUID, allowNull: false },
-      hangId: { type: DataTypes.UUID, allowNull: true },
+      ...uuidKey(),
+      venueId: requiredUuid(),
+      linesetId: requiredUuid(),
+      hangId: optionalUuid(),
       state: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'requested' },
-      requestedBy: { type: DataTypes.UUID, allowNull: true },
-      decidedBy: { type: DataTypes.UUID, allowNull: true },
+      requestedBy: optionalUuid(),
+      decidedBy: optionalUuid(),
       decidedAt: { type: DataTypes.DATE, allowNull: true },
-      requiredWeight: { type: DataTypes.DECIMAL, allowNull: true },
-      loadedWeight: { type: DataTypes.DECIMAL, allowNull: true },
+      requiredWeight: optionalDecimal(),
+      loadedWeight: optionalDecimal(),
       note: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
-      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      ...lockVersion(),
+      ...timestamps(),
     },
     { sequelize, tableName: 'weight_change_tickets' },
   )

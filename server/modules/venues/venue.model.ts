@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import { uuidKey, lockVersion, timestamps, requiredDecimal, requiredText } from '../../db/columns.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 
 export function defineVenueModel(sequelize: Sequelize) {
@@ -16,15 +17,14 @@ export function defineVenueModel(sequelize: Sequelize) {
   }
   VenueModel.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-      name: { type: DataTypes.TEXT, allowNull: false },
-      unitSystem: { type: DataTypes.TEXT, allowNull: false },
-      balanceTolerance: { type: DataTypes.DECIMAL, allowNull: false },
-      ropeLockHolding: { type: DataTypes.DECIMAL, allowNull: false },
-      wireRopeDesignFactor: { type: DataTypes.DECIMAL, allowNull: false },
-      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      ...uuidKey(),
+      name: requiredText(),
+      unitSystem: requiredText(),
+      balanceTolerance: requiredDecimal(),
+      ropeLockHolding: requiredDecimal(),
+      wireRopeDesignFactor: requiredDecimal(),
+      ...lockVersion(),
+      ...timestamps(),
     },
     { sequelize, tableName: 'venues' },
   )

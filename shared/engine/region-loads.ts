@@ -1,6 +1,7 @@
 import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
 import type { LocalPoint } from './batten-model.js'
+import { exactRunningSums, type SumColumns } from './exact-sums.js'
 
 /**
  * A step in spread intensity at u within a region (u-sense): `up` where a spread starts, down
@@ -17,12 +18,12 @@ export interface IntensityStep { at: Decimal; float: number; w: Decimal; up: boo
 export interface LoadSums {
   /** Point positions, ascending. */
   pointAt: Decimal[]
-  /** pointSums[k][i]: Σ W·aᵏ over the first i points, k = 0..3 (one column per power; row 0 is zero). */
-  pointSums: Decimal[][]
+  /** pointSums.row(i)[k]: Σ W·aᵏ over the first i points, k = 0..3 (one column per power; row 0 is zero). */
+  pointSums: SumColumns
   /** Distinct positions where the spread intensity steps, ascending. */
   stepAt: Decimal[]
-  /** stepSums[k][i]: Σ Δw·tᵏ over the first i steps, k = 0..4; stepSums[0][i] is the intensity after them. */
-  stepSums: Decimal[][]
+  /** stepSums.row(i)[k]: Σ Δw·tᵏ over the first i steps, k = 0..4; row(i)[0] is the intensity after them. */
+  stepSums: SumColumns
 }
 
 const ZERO = Dec(0)
@@ -41,34 +42,34 @@ const byPosition = <T extends { at: Decimal; float: number }>(a: T, b: T) => a.f
  *
  * @example
  * const { sums } = sumRegionLoads([{ u: Dec(4), weight: Dec(5), float: { u: 4, weight: 5 } }], [], Dec(0))
- * sums.pointSums[1]![1]!.toString() // '20' (Σ W·a after the first point: 5 × 4)
+ * sums.pointSums.row(1)[1]!.toString() // '20' (Σ W·a after the first point: 5 × 4)
  */
 export function sumRegionLoads(points: readonly LocalPoint[], steps: readonly IntensityStep[], entering: Decimal, closeAt?: Decimal): { sums: LoadSums; leaving: Decimal } {
   const ordered = points.map((p) => ({ at: p.u, float: p.float.u, weight: p.weight })).sort(byPosition)
-  // Columns rather than a row per load: four decimals per load are all it allocates.
-  const pointSums: Decimal[][] = [[ZERO], [ZERO], [ZERO], [ZERO]]
-  for (const { at, weight } of ordered) {
-    const first = weight.times(at)
-    const second = first.times(at)
-    extend(pointSums, [weight, first, second, second.times(at)])
-  }
+  const pointAt = ordered.map((p) => p.at)
+  const weights = ordered.map((p) => p.weight)
   const sorted = [{ at: ZERO, float: 0, w: entering, up: true }, ...steps].sort(byPosition)
   const stepAt: Decimal[] = []
-  const stepSums: Decimal[][] = [[ZERO], [ZERO], [ZERO], [ZERO], [ZERO]]
-  const addStep = (at: Decimal, rise: Decimal) => {
-    stepAt.push(at)
-    extend(stepSums, at.isZero() ? [rise] : powers(rise, at))
-  }
+  const rises: Decimal[] = []
+  let leaving = ZERO
   for (let i = 0; i < sorted.length; ) {
     const { at } = sorted[i]!
     // Spreads often share an edge: one step there, one set of powers.
     let rise = ZERO
     for (; i < sorted.length && (sorted[i]!.at === at || sorted[i]!.at.eq(at)); i++) rise = sorted[i]!.up ? rise.plus(sorted[i]!.w) : rise.minus(sorted[i]!.w)
-    if (!rise.isZero()) addStep(at, rise)
+    if (rise.isZero()) continue
+    stepAt.push(at)
+    rises.push(rise)
+    leaving = leaving.plus(rise)
   }
-  const leaving = last(stepSums[0]!)
-  if (closeAt && !leaving.isZero()) addStep(closeAt, leaving.neg())
-  return { sums: { pointAt: ordered.map((p) => p.at), pointSums, stepAt, stepSums }, leaving }
+  if (closeAt && !leaving.isZero()) {
+    stepAt.push(closeAt)
+    rises.push(leaving.neg())
+  }
+  // Exact integers where the figures allow (the usual case), the decimal sums otherwise: the same values.
+  const pointSums = exactRunningSums(pointAt, weights, 4) ?? decimalSums(pointAt, weights, 4, pointPowers)
+  const stepSums = exactRunningSums(stepAt, rises, 5) ?? decimalSums(stepAt, rises, 5, powers)
+  return { sums: { pointAt, pointSums, stepAt, stepSums }, leaving }
 }
 
 /**
@@ -81,7 +82,7 @@ export function sumRegionLoads(points: readonly LocalPoint[], steps: readonly In
 export function sumsBefore(sums: LoadSums, u: Decimal): { points: Decimal[]; steps: Decimal[] } {
   const i = countBelow(sums.pointAt, u)
   const j = countBelow(sums.stepAt, u)
-  return { points: sums.pointSums.map((column) => column[i]!), steps: sums.stepSums.map((column) => column[j]!) }
+  return { points: [...sums.pointSums.row(i)], steps: [...sums.stepSums.row(j)] }
 }
 
 /**
@@ -91,10 +92,26 @@ export function sumsBefore(sums: LoadSums, u: Decimal): { points: Decimal[]; ste
  * totalSums(sums).points[0]!.toString() // total point weight in the region
  */
 export function totalSums(sums: LoadSums): { points: Decimal[]; steps: Decimal[] } {
-  return { points: sums.pointSums.map(last), steps: sums.stepSums.map(last) }
+  return { points: [...sums.pointSums.row(sums.pointSums.rows - 1)], steps: [...sums.stepSums.row(sums.stepSums.rows - 1)] }
+}
+
+/**
+ * The running sums in decimals, for figures the exact integers cannot hold: columns rather than a
+ * row per load, so the terms are all a load allocates.
+ */
+function decimalSums(at: readonly Decimal[], coefficient: readonly Decimal[], count: number, terms: (c: Decimal, x: Decimal) => Decimal[]): SumColumns {
+  const columns: Decimal[][] = Array.from({ length: count }, () => [ZERO])
+  at.forEach((x, i) => extend(columns, x.isZero() ? [coefficient[i]!] : terms(coefficient[i]!, x)))
+  return { rows: at.length + 1, row: (i) => columns.map((column) => column[i]!) }
 }
 
 const last = (column: readonly Decimal[]) => column[column.length - 1]!
+
+function pointPowers(weight: Decimal, at: Decimal): Decimal[] {
+  const first = weight.times(at)
+  const second = first.times(at)
+  return [weight, first, second, second.times(at)]
+}
 
 function powers(rise: Decimal, at: Decimal): Decimal[] {
   const first = rise.times(at)

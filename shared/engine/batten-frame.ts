@@ -3,6 +3,7 @@ import type { Decimal } from 'decimal.js'
 import type { LocalPoint, LocalSpread } from './batten-model.js'
 import type { IntensityStep } from './region-loads.js'
 import { floatOf } from './decimal-float.js'
+import { exactOffset, numberDigits, type NumberDigits } from './exact-offset.js'
 
 /** A region while loads are placed in it: its loads so far and where its u = 0 is. */
 export interface RegionDraft {
@@ -12,6 +13,8 @@ export interface RegionDraft {
   spreads: LocalSpread[]
   steps: IntensityStep[]
   origin: Decimal
+  /** The origin's digits as a safe integer, for exact offsets without decimals (undefined: use decimals). */
+  originDigits: NumberDigits | undefined
   /** True for the start overhang, where u runs from its line toward x = 0. */
   outward: boolean
 }
@@ -29,11 +32,11 @@ export interface BattenFrame {
   lineEdges: Array<Array<{ w: Decimal; up: boolean }>>
 }
 
-/** Where a position falls: on a line, or in a region at u (with x itself as a decimal, and u as a number). */
-export type Place = { line: number; x: Decimal } | { region: RegionDraft; x: Decimal; u: Decimal; float: number }
+/** Where a position falls: on a line, or in a region at u (and u as a number). */
+export type Place = { line: number } | { region: RegionDraft; u: Decimal; float: number }
 
-const draft = (length: Decimal, origin: Decimal, outward: boolean): RegionDraft =>
-  ({ length, lengthFloat: floatOf(length), points: [], spreads: [], steps: [], origin, outward })
+const draft = (length: Decimal, origin: Decimal, originNumber: number, outward: boolean): RegionDraft =>
+  ({ length, lengthFloat: floatOf(length), points: [], spreads: [], steps: [], origin, originDigits: numberDigits(originNumber), outward })
 
 /**
  * The empty regions of a batten hung from its pick points.
@@ -50,15 +53,15 @@ export function battenFrame(length: number, pickPoints: readonly number[]): Batt
     length: total,
     lengthNumber: length,
     supports,
-    start: draft(supports[0]!, supports[0]!, true),
-    spans: supports.slice(1).map((x, k) => draft(x.minus(supports[k]!), supports[k]!, false)),
-    end: draft(total.minus(supports[last]!), supports[last]!, false),
+    start: draft(supports[0]!, supports[0]!, pickPoints[0]!, true),
+    spans: supports.slice(1).map((x, k) => draft(x.minus(supports[k]!), supports[k]!, pickPoints[k]!, false)),
+    end: draft(total.minus(supports[last]!), supports[last]!, pickPoints[last]!, false),
     lineEdges: supports.map(() => []),
   }
 }
 
 /**
- * Locates x, converting it to decimals once. A batten end is an overhang's own length (the same
+ * Locates x, as u within its region. A batten end is an overhang's own length (the same
  * object, so equal edges there are found without a decimal comparison).
  *
  * @example
@@ -68,13 +71,14 @@ export function battenFrame(length: number, pickPoints: readonly number[]): Batt
 export function place(frame: BattenFrame, x: number): Place {
   const { xs, start, spans, end } = frame
   const index = findRegion(xs, x)
-  if (index.line !== undefined) return { line: index.line, x: frame.supports[index.line]! }
+  if (index.line !== undefined) return { line: index.line }
   const region = index.span === -1 ? start : index.span === xs.length - 1 ? end : spans[index.span]!
-  if (region === start && x === 0) return { region, x: Dec(0), u: region.length, float: region.lengthFloat }
-  if (region === end && x === frame.lengthNumber) return { region, x: frame.length, u: region.length, float: region.lengthFloat }
-  const exact = Dec(x)
-  const u = region.outward ? region.origin.minus(exact) : exact.minus(region.origin)
-  return { region, x: exact, u, float: floatOf(u) }
+  if (region === start && x === 0) return { region, u: region.length, float: region.lengthFloat }
+  if (region === end && x === frame.lengthNumber) return { region, u: region.length, float: region.lengthFloat }
+  // Most positions are short figures: u straight from integers, one decimal made, none subtracted.
+  const u = (region.originDigits && exactOffset(x, region.originDigits, region.outward)) ??
+    (region.outward ? region.origin.minus(Dec(x)) : Dec(x).minus(region.origin))
+  return { region, u, float: floatOf(u) }
 }
 
 /** Which line a position sits on, or which span (-1 before the first line, last index after the last). */

@@ -4,6 +4,7 @@ import { battenFrame, place, type BattenFrame, type RegionDraft } from './batten
 import { sumRegionLoads, totalSums, type LoadSums } from './region-loads.js'
 import { placeSpread } from './spread-placement.js'
 import { floatOf } from './decimal-float.js'
+import { exactOffset, numberDigits } from './exact-offset.js'
 
 /**
  * A weight at a point, located within its region (see {@link Region}). `float` holds the same
@@ -54,6 +55,12 @@ const ZERO = Dec(0)
 /** A number's decimal parses back to the same number, so its float twin is the number itself. */
 const toFloat = (value: Decimal.Value, exact: Decimal) => (typeof value === 'number' ? value : floatOf(exact))
 
+/** to − from exactly: in integers where the figures are short, in decimals otherwise (the same value). */
+function spreadLength(from: number, to: number): Decimal {
+  const start = numberDigits(from)
+  return (start && exactOffset(to, start, false)) ?? Dec(to).minus(Dec(from))
+}
+
 /** One decimal per distinct figure in a calculation: a batten often carries many identical fixtures. */
 function decimals(): (value: Decimal.Value) => Decimal {
   const made = new Map<number, Decimal>()
@@ -92,8 +99,8 @@ export function buildBattenModel(loads: BattenLoads): BattenModel {
   let itemsWeight = direct.reduce((sum, d) => sum.plus(d), ZERO)
   for (const spread of loads.spreads) {
     const w = decimal(spread.weightPerLength)
-    const { start, end } = placeSpread(frame, spread.from, spread.to, w, toFloat(spread.weightPerLength, w))
-    itemsWeight = itemsWeight.plus(w.times(end.x.minus(start.x)))
+    placeSpread(frame, spread.from, spread.to, w, toFloat(spread.weightPerLength, w))
+    itemsWeight = itemsWeight.plus(w.times(spreadLength(spread.from, spread.to)))
   }
   if (loads.atEachLine !== undefined) {
     const share = Dec(loads.atEachLine)

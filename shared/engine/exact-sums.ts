@@ -1,5 +1,6 @@
 import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
+import { scaledDecimal } from './scaled-decimal.js'
 
 /** Running sums kept as columns (one per power of position), read one row at a time. */
 export interface SumColumns {
@@ -29,6 +30,15 @@ export function scaledInteger(value: Decimal): { units: bigint; scale: number } 
   if (!words) return undefined
   if (words[0] === 0) return { units: 0n, scale: 0 }
   let power = value.e - (String(words[0]).length + 7 * (words.length - 1)) + 1
+  // Up to two words the digits are below 10¹⁴ < 2⁵³: exact as a double, and far cheaper to trim there.
+  if (words.length <= 2) {
+    let digits = words.length === 2 ? words[0]! * 1e7 + words[1]! : words[0]!
+    for (; power < 0 && digits % 10 === 0; power++) digits /= 10
+    if (power < -MAX_SCALE) return undefined
+    let small = BigInt(digits)
+    if (power > 0) small *= 10n ** BigInt(power)
+    return { units: value.s < 0 ? -small : small, scale: Math.max(0, -power) }
+  }
   // Integers only, never a double: every step here is exact.
   let units = 0n
   for (const word of words) units = units * WORD + BigInt(word)
@@ -89,4 +99,4 @@ function scaleAll(values: readonly Decimal[]): { units: bigint[]; scale: number 
 
 const ZERO = Dec(0)
 // Row 0, and any column a region leaves empty, is zero: no digits to read.
-const toDecimal = (units: bigint, scale: number) => (units === 0n ? ZERO : Dec(scale === 0 ? units.toString() : `${units}e-${scale}`))
+const toDecimal = (units: bigint, scale: number) => (units === 0n ? ZERO : scaledDecimal(units, scale))

@@ -1,0 +1,86 @@
+import { mkdirSync } from 'node:fs'
+import { join } from 'node:path'
+import type { BrowserContext, Page } from 'playwright-core'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { runCalculation } from '../../shared/engine/calculate.js'
+import { linesetCalculationInput } from '../../shared/hang/lineset-calculation.js'
+import type { Lineset } from '../../shared/schemas/lineset.js'
+import { seedDemoIfEmpty } from '../../server/db/seeders/demo.js'
+import { DEMO_BRICK_TYPES, DEMO_LINESETS } from '../../server/db/seeders/demo-linesets.js'
+import { DEMO_PASSWORD } from '../../server/db/seeders/demo-people.js'
+import { buildClientIfStale } from '../../scripts/lib/client-build.js'
+import { projectRoot } from '../../scripts/lib/paths.js'
+import { launchChromium } from '../support/browser.js'
+import { startTestApp, type TestApp } from '../support/test-app.js'
+
+const artifacts = join(projectRoot, 'tests', 'artifacts')
+let app: TestApp
+let chromium: Awaited<ReturnType<typeof launchChromium>>
+let context: BrowserContext
+
+beforeAll(async () => {
+  const clientDir = join(projectRoot, 'dist')
+  await buildClientIfStale(clientDir)
+  app = await startTestApp({ env: { CLIENT_DIR: clientDir } })
+  await seedDemoIfEmpty(app.handle.db)
+  chromium = await launchChromium()
+  context = chromium.context
+  mkdirSync(artifacts, { recursive: true })
+})
+afterAll(async () => {
+  await chromium?.close()
+  await app?.stop()
+})
+
+async function signIn(email: string): Promise<Page> {
+  await context.clearCookies() // one browser profile, a fresh session per person
+  const page = await context.newPage()
+  await page.goto(app.url)
+  await page.locator('[data-testid=sign-in-email] input').fill(email)
+  await page.locator('[data-testid=sign-in-password] input').fill(DEMO_PASSWORD)
+  await page.locator('[data-testid=sign-in-password] input').press('Enter')
+  await page.locator('[data-testid=linesets-row-1]').waitFor()
+  return page
+}
+
+describe('the crew at work', () => {
+  it('when the technical director renames a lineset, then the new name is saved and read back after a reload', async () => {
+    const page = await signIn('td@demo.test')
+    await page.locator('[data-testid=linesets-row-3]').click()
+    const name = page.locator('[data-testid=lineset-field-name] input')
+    await name.fill('Border 1 (rehung)')
+    await page.locator('[data-testid=lineset-save]').click()
+    await page.locator('[data-testid=lineset-saved]').waitFor()
+    await page.reload()
+    await expect.poll(() => page.locator('[data-testid=lineset-field-name] input').inputValue()).toBe('Border 1 (rehung)')
+    expect(await page.locator('[data-testid=nav-people]').count()).toBe(0)
+    await page.close()
+  })
+
+  it('when the fly operator tries a hang, then the panel shows the brick plan the shared engine computes, beside the cautions', async () => {
+    const page = await signIn('fly@demo.test')
+    await page.locator('[data-testid=linesets-row-1]').click()
+    await page.locator('[data-testid=balance-add-item]').click()
+    await page.locator('[data-testid=balance-row-0-label] input').fill('Show drop')
+    await page.locator('[data-testid=balance-row-0-weight] input').fill('200')
+    await page.locator('[data-testid=balance-row-0-at] input').fill('24')
+
+    // What the same shared code gives for the demo lineset 1 with that item.
+    const demo = DEMO_LINESETS[0]!
+    const lineset = { id: 'x', version: 0, updatedAt: '', distanceFromPlasterLine: null, pipeMomentOfInertia: null, pipeSectionModulus: null, liftLineWeightPerLength: null, liftLineBreakingStrength: null, arborEmptyWeight: null, arborCapacity: null, arborStackLength: null, ratedLoad: null, pipeWeight: null, travel: null, sandbagWeight: null, hoistRatedCapacity: null, hoistSpeed: null, ...demo } as Lineset
+    const venue = { unitSystem: 'imperial' as const, balanceTolerance: 10, ropeLockHolding: 50, wireRopeDesignFactor: 8 }
+    const brickTypes = DEMO_BRICK_TYPES.map((b) => ({ ...b }))
+    const outcome = runCalculation(linesetCalculationInput({ lineset, venue, brickTypes, items: [{ label: 'Show drop', weight: 200, at: 24 }] }))
+    if (!outcome.ok) throw new Error(JSON.stringify(outcome.error))
+    const planned = outcome.result.counterweight!.bricks.filter((b) => b.count > 0)
+    expect(planned.length).toBeGreaterThan(0)
+
+    const plan = page.locator('[data-testid=balance-brick-plan]')
+    await plan.waitFor()
+    for (const brick of planned) await expect.poll(() => plan.innerText()).toContain(`${brick.count} × ${brick.name}`)
+    await expect.poll(() => page.locator('[data-testid=balance-cautions]').innerText()).toMatch(/qualified person/)
+    expect(await page.locator('[data-testid=lineset-save]').count()).toBe(0)
+    await page.locator('[data-testid=balance-panel]').screenshot({ path: join(artifacts, 'fly-operator-try-a-hang.png') })
+    await page.close()
+  })
+})

@@ -1,6 +1,6 @@
-import { describe, expect, it } from 'vitest'
+import { afterAll, describe, expect, it } from 'vitest'
 import { spawnSync } from 'node:child_process'
-import { mkdtempSync, writeFileSync } from 'node:fs'
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
 import { SAMPLE_INPUT } from '../engine/lineset-input.js'
@@ -9,6 +9,7 @@ const root = join(import.meta.dirname, '..', '..', '..')
 const calc = (args: string[], input?: string) =>
   spawnSync(process.execPath, ['--import', 'tsx', 'scripts/calc.ts', ...args], { cwd: root, input, encoding: 'utf8', timeout: 30000 })
 const folder = mkdtempSync(join(tmpdir(), 'loftledger-calc-'))
+afterAll(() => rmSync(folder, { recursive: true, force: true }))
 const file = (name: string, text: string) => {
   const path = join(folder, name)
   writeFileSync(path, text)

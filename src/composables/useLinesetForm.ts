@@ -23,6 +23,10 @@ export function useLinesetForm(options: Options) {
   const submitted = ref(false)
   const serverFields = ref<Record<string, string>>({})
 
+  // What the form opened with; any difference is work that leaving the page would lose.
+  const pristine = JSON.stringify(draft)
+  const dirty = computed(() => !options.readonly() && JSON.stringify(draft) !== pristine)
+
   const verdict = computed(() => linesetInputSchema.safeParse(bodyFrom(draft, figures, options.unitSystem())))
   const clientFields = computed(() => (verdict.value.success ? {} : fieldsFromIssues(verdict.value.error.issues)))
 
@@ -85,7 +89,7 @@ export function useLinesetForm(options: Options) {
     return verdict.value.success ? verdict.value.data : null
   }
 
-  return { draft, touched, submitted, serverFields, clientFields, messageFor, edited, unit, fill, bind, bindPickPoint, submit, readonly: options.readonly }
+  return { draft, dirty, touched, submitted, serverFields, clientFields, messageFor, edited, unit, fill, bind, bindPickPoint, submit, readonly: options.readonly }
 }
 
 export type LinesetForm = ReturnType<typeof useLinesetForm>

@@ -57,6 +57,25 @@ describe('the crew at work', () => {
     await page.close()
   })
 
+  it('when someone leaves a lineset with unsaved changes, then the app asks first and stays if told to', async () => {
+    const page = await signIn('td@demo.test')
+    await page.locator('[data-testid=linesets-row-4]').click()
+    await page.locator('[data-testid=lineset-field-name] input').fill('Legs 1, half typed')
+    const questions: string[] = []
+    page.once('dialog', (dialog) => {
+      questions.push(dialog.message())
+      void dialog.dismiss()
+    })
+    await page.locator('[data-testid=lineset-back]').click()
+    await expect.poll(() => questions).toEqual(['Leave without saving your changes to this lineset?'])
+    expect(await page.locator('[data-testid=lineset-field-name] input').inputValue()).toBe('Legs 1, half typed')
+    page.once('dialog', (dialog) => void dialog.accept())
+    await page.locator('[data-testid=lineset-back]').click()
+    await page.locator('[data-testid=linesets-row-4]').waitFor()
+    expect(await page.locator('[data-testid=linesets-row-4]').innerText()).toContain('Legs 1')
+    await page.close()
+  })
+
   it('when the fly operator tries a hang, then the panel shows the brick plan the shared engine computes, beside the cautions', async () => {
     const page = await signIn('fly@demo.test')
     await page.locator('[data-testid=linesets-row-1]').click()

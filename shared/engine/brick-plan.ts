@@ -4,8 +4,17 @@ import type { Decimal } from 'decimal.js'
 /** A venue's brick type and how many are free to load. */
 export interface BrickStock { name: string; weight: number; thickness: number; available: number }
 
-/** Counts per brick type (in stock order) and what they add up to. */
-export interface BrickPlan { counts: number[]; loaded: Decimal; stackUsed: Decimal; bricks: number }
+/**
+ * Counts per brick type (in stock order) and what they add up to. `complete` is false when the search
+ * hit its work limit: the plan still fits stock, capacity and stack, but a closer one may exist.
+ */
+export interface BrickPlan { counts: number[]; loaded: Decimal; stackUsed: Decimal; bricks: number; complete: boolean }
+
+/**
+ * How many partial plans the search may try. Ordinary stocks finish in a few thousand; this bound keeps an
+ * unusual stock (many types with many-decimal weights) from holding a request or a keystroke for seconds.
+ */
+export const BRICK_PLAN_WORK_LIMIT = 200_000
 
 interface Scaled { weight: number; thickness: number; available: number; index: number }
 
@@ -38,7 +47,7 @@ export function planBricks(stock: readonly BrickStock[], limit: Decimal.Value, s
   best.counts.forEach((count, k) => (counts[types[k]!.index] = count))
   const loaded = stock.reduce((sum, b, i) => sum.plus(Dec(b.weight).times(counts[i]!)), Dec(0))
   const stackUsed = stock.reduce((sum, b, i) => sum.plus(Dec(b.thickness).times(counts[i]!)), Dec(0))
-  return { counts, loaded, stackUsed, bricks: counts.reduce((a, b) => a + b, 0) }
+  return { counts, loaded, stackUsed, bricks: counts.reduce((a, b) => a + b, 0), complete: best.complete }
 }
 
 function greatestCommonDivisor(a: number, b: number): number {
@@ -58,7 +67,9 @@ function search(types: Scaled[], limit: number, stackRoom: number) {
   let bestCount = Infinity
   let bestCounts: number[] = []
   const counts: number[] = new Array(n).fill(0)
+  let work = 0
   const visit = (i: number, weight: number, stackLeft: number, count: number): void => {
+    if (++work > BRICK_PLAN_WORK_LIMIT) return
     if (weight > bestWeight || (weight === bestWeight && count < bestCount)) {
       bestWeight = weight
       bestCount = count
@@ -79,5 +90,5 @@ function search(types: Scaled[], limit: number, stackRoom: number) {
     counts[i] = 0
   }
   visit(0, 0, stackRoom, 0)
-  return { counts: bestCounts }
+  return { counts: bestCounts, complete: work <= BRICK_PLAN_WORK_LIMIT }
 }

@@ -34,7 +34,9 @@ export function solveContinuousBeam(model: BattenModel): BeamSolution {
   moments[n - 1] = end.moment.neg()
   if (n === 1) {
     const reaction = start.weight.plus(end.weight).plus(model.direct[0]!)
-    const supportMoment = moments[0]!.abs().gte(moments[n - 1]!.abs()) ? moments[0]! : moments[n - 1]!
+    // One line: both overhangs hang from it, so compare their own moments (moments[0] and moments[n - 1] are one slot).
+    const [startMoment, endMoment] = [start.moment.neg(), end.moment.neg()]
+    const supportMoment = startMoment.abs().gte(endMoment.abs()) ? startMoment : endMoment
     return { reactions: [reaction], supportMoments: [supportMoment], spanStartShear: [], spanMoments: [], unbalancedMoment: end.moment.minus(start.moment) }
   }
   const spanMoments = model.spans.map(regionMoments)

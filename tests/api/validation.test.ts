@@ -90,3 +90,25 @@ describe('every problem is named at once', () => {
     expect(res.body.error.fields).toEqual({ travel: 'Enter a number', 'pickPoints.2': 'Lies beyond the end of the batten' })
   })
 })
+
+describe('an edit typed in units the venue has since left', () => {
+  it('when the venue switches units while a lineset or brick is open, then saving it answers 409 and nothing is stored in the wrong units', async () => {
+    const admin = await signedIn(app.url, venue.emails.administrator)
+    const lineset = (await td.get(`/api/v1/linesets/${venue.linesetId}`).expect(200)).body
+    const brick = (await td.get('/api/v1/brick-types').expect(200)).body[0]
+    const settings = (await admin.get('/api/v1/venue').expect(200)).body
+    await admin.put('/api/v1/venue', { ...settings, unitSystem: 'metric', balanceTolerance: 5, ropeLockHolding: 23 }).expect(200)
+
+    const { id, updatedAt, ...body } = lineset
+    void id, void updatedAt
+    const staleLineset = await td.put(`/api/v1/linesets/${venue.linesetId}`, { ...body, battenLength: 40 })
+    expect(staleLineset.status).toBe(409)
+    const { id: brickId, ...brickBody } = brick
+    expect((await td.put(`/api/v1/brick-types/${brickId}`, brickBody)).status).toBe(409)
+
+    const metric = (await td.get(`/api/v1/linesets/${venue.linesetId}`).expect(200)).body
+    expect(metric.battenLength).toBe(Number((lineset.battenLength * 0.3048).toFixed(6))) // ft -> m, NIST SP 811
+    const back = (await admin.get('/api/v1/venue').expect(200)).body
+    await admin.put('/api/v1/venue', { ...back, unitSystem: 'imperial', balanceTolerance: 10, ropeLockHolding: 50 }).expect(200)
+  })
+})

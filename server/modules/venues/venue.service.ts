@@ -37,20 +37,29 @@ export async function getVenue(db: Database, actor: SessionUser): Promise<Venue>
  * to metric with a tolerance of 5 means 5 kg. Stored figures are SI, so nothing else needs rewriting.
  */
 export async function updateVenue(db: Database, actor: SessionUser, body: VenueSettingsUpdate): Promise<Venue> {
-  const [count] = await db.models.Venue.update(
-    {
-      name: body.name,
-      unitSystem: body.unitSystem,
-      balanceTolerance: storedFromApi(body.balanceTolerance, 'weight', body.unitSystem)!,
-      ropeLockHolding: storedFromApi(body.ropeLockHolding, 'weight', body.unitSystem)!,
-      wireRopeDesignFactor: String(body.wireRopeDesignFactor),
-      version: body.version + 1,
-    },
-    { where: { id: actor.venueId, version: body.version } },
-  )
-  if (count === 0) {
-    if (await db.models.Venue.count({ where: { id: actor.venueId } })) throw staleVersion('The venue settings')
-    throw notFound('The venue')
-  }
+  await db.sequelize.transaction(async (transaction) => {
+    const current = await db.models.Venue.findByPk(actor.venueId, { transaction, lock: transaction.LOCK.UPDATE })
+    if (!current) throw notFound('The venue')
+    if (current.version !== body.version) throw staleVersion('The venue settings')
+    const unitsSwitched = current.unitSystem !== body.unitSystem
+    await current.update(
+      {
+        name: body.name,
+        unitSystem: body.unitSystem,
+        balanceTolerance: storedFromApi(body.balanceTolerance, 'weight', body.unitSystem)!,
+        ropeLockHolding: storedFromApi(body.ropeLockHolding, 'weight', body.unitSystem)!,
+        wireRopeDesignFactor: String(body.wireRopeDesignFactor),
+        version: body.version + 1,
+      },
+      { transaction },
+    )
+    // Figures read before a switch of units were typed in the old units: make every such edit stale (409),
+    // so a 40 (ft) sent after the venue went metric is never stored as 40 m.
+    if (unitsSwitched) {
+      const where = { venueId: actor.venueId }
+      await db.models.Lineset.increment('version', { where, transaction })
+      await db.models.BrickType.increment('version', { where, transaction })
+    }
+  })
   return getVenue(db, actor)
 }

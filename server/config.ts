@@ -7,8 +7,15 @@ const configSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   DATABASE_URL: z.string().min(1, 'DATABASE_URL is required'),
   SESSION_SECRET: z.string().min(32, 'SESSION_SECRET must be at least 32 characters'),
-  /** Set when the app sits behind a reverse proxy, so client addresses (rate limits) come from X-Forwarded-For. */
-  TRUST_PROXY: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  /**
+   * How many reverse proxies stand in front of the app (0 = none). Client addresses (and so the sign-in
+   * limit) come from that many X-Forwarded-For hops, never from whatever a client writes there itself.
+   */
+  TRUST_PROXY: z
+    .string()
+    .default('0')
+    .transform((v) => Number(v === 'false' ? '0' : v === 'true' ? '1' : v))
+    .pipe(z.number().int('TRUST_PROXY is a number of proxy hops').min(0).max(10)),
   /** Send cookies only over HTTPS; on by default in production. */
   SECURE_COOKIES: z.enum(['true', 'false']).optional(),
   /** Failed sign-ins allowed per address per minute before 429. */
@@ -23,7 +30,8 @@ export type Config = Readonly<{
   port: number
   databaseUrl: string
   sessionSecret: string
-  trustProxy: boolean
+  /** Proxy hops to trust for the client address (0 = none). */
+  trustProxy: number
   secureCookies: boolean
   signInAttemptsPerMinute: number
   clientDir?: string

@@ -53,3 +53,22 @@ describe('people and roles', () => {
     expect((await tempClient.get('/api/v1/linesets')).status).toBe(401)
   })
 })
+
+describe('two administrators at once', () => {
+  it('when two administrators demote each other at the same moment, then one change wins and the venue keeps an administrator', async () => {
+    const second = (await admin.post('/api/v1/people', { email: 'second.admin@alpha.test', name: 'Second Admin', role: 'administrator', password: 'a-long-password' }).expect(201)).body
+    const other = await signedIn(app.url, 'second.admin@alpha.test', 'a-long-password')
+    const first = (await admin.get('/api/v1/people')).body.find((p: { id: string }) => p.id === venue.membershipIds.administrator)
+    const [a, b] = await Promise.all([
+      admin.put(`/api/v1/people/${second.id}`, { role: 'stage-manager', version: second.version }),
+      other.put(`/api/v1/people/${first.id}`, { role: 'stage-manager', version: first.version }),
+    ])
+    // The loser is refused either as the last administrator (409) or, if the winner's change landed before
+    // the loser's request was let in, because they are no longer an administrator (403).
+    const statuses = [a.status, b.status].sort()
+    expect(statuses[0]).toBe(200)
+    expect([403, 409]).toContain(statuses[1])
+    const administrators = (await app.handle.db.models.Membership.count({ where: { venueId: venue.venueId, role: 'administrator' } }))
+    expect(administrators).toBe(1)
+  })
+})

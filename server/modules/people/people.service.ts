@@ -1,4 +1,5 @@
 import bcrypt from 'bcryptjs'
+import type { Transaction } from 'sequelize'
 import type { Person, PersonInput, PersonUpdate } from '../../../shared/schemas/person.js'
 import type { SessionUser } from '../../../shared/schemas/session.js'
 import type { Database } from '../../db/models.js'
@@ -20,8 +21,8 @@ export async function listPeople(db: Database, actor: SessionUser): Promise<Pers
   return rows.map(toApi)
 }
 
-async function findMember(db: Database, actor: SessionUser, id: string) {
-  const row = await db.models.Membership.findOne({ where: { id, venueId: actor.venueId }, include: [{ model: db.models.User, as: 'user' }] })
+async function findMember(db: Database, actor: SessionUser, id: string, transaction?: Transaction) {
+  const row = await db.models.Membership.findOne({ where: { id, venueId: actor.venueId }, include: [{ model: db.models.User, as: 'user' }], transaction })
   if (!row) throw notFound('That person')
   return row
 }
@@ -43,28 +44,39 @@ export async function addPerson(db: Database, actor: SessionUser, body: PersonIn
   return toApi(await findMember(db, actor, id))
 }
 
-async function refuseLosingLastAdministrator(db: Database, actor: SessionUser, member: MembershipModel) {
+/**
+ * Runs a change to the venue's members with the venue row locked, so two administrators demoting or
+ * removing each other at once are taken one after the other and the last administrator always stays.
+ */
+function withMembersLocked<T>(db: Database, actor: SessionUser, work: (transaction: Transaction) => Promise<T>) {
+  return db.sequelize.transaction(async (transaction) => {
+    await db.models.Venue.findByPk(actor.venueId, { transaction, lock: transaction.LOCK.UPDATE, attributes: ['id'] })
+    return work(transaction)
+  })
+}
+
+async function refuseLosingLastAdministrator(db: Database, actor: SessionUser, member: MembershipModel, transaction: Transaction) {
   if (member.role !== 'administrator') return
-  const administrators = await db.models.Membership.count({ where: { venueId: actor.venueId, role: 'administrator' } })
+  const administrators = await db.models.Membership.count({ where: { venueId: actor.venueId, role: 'administrator' }, transaction })
   if (administrators <= 1) throw new AppError(409, 'last_administrator', 'A venue must keep at least one administrator')
 }
 
 export async function changeRole(db: Database, actor: SessionUser, id: string, body: PersonUpdate): Promise<Person> {
-  const member = await findMember(db, actor, id)
-  if (member.version !== body.version) throw staleVersion(`${member.user!.name}'s role`)
-  if (body.role !== 'administrator') await refuseLosingLastAdministrator(db, actor, member)
-  const [count] = await db.models.Membership.update(
-    { role: body.role, version: body.version + 1 },
-    { where: { id, venueId: actor.venueId, version: body.version } },
-  )
-  if (count === 0) throw staleVersion(`${member.user!.name}'s role`)
+  await withMembersLocked(db, actor, async (transaction) => {
+    const member = await findMember(db, actor, id, transaction)
+    if (member.version !== body.version) throw staleVersion(`${member.user!.name}'s role`)
+    if (body.role !== 'administrator') await refuseLosingLastAdministrator(db, actor, member, transaction)
+    await member.update({ role: body.role, version: body.version + 1 }, { transaction })
+  })
   return toApi(await findMember(db, actor, id))
 }
 
 /** Removes a person's role here (their account stays, with any other venue's roles). */
 export async function removePerson(db: Database, actor: SessionUser, id: string): Promise<void> {
-  const member = await findMember(db, actor, id)
-  if (member.userId === actor.id) throw new AppError(409, 'cannot_remove_self', 'You cannot remove yourself; ask another administrator')
-  await refuseLosingLastAdministrator(db, actor, member)
-  await member.destroy()
+  await withMembersLocked(db, actor, async (transaction) => {
+    const member = await findMember(db, actor, id, transaction)
+    if (member.userId === actor.id) throw new AppError(409, 'cannot_remove_self', 'You cannot remove yourself; ask another administrator')
+    await refuseLosingLastAdministrator(db, actor, member, transaction)
+    await member.destroy({ transaction })
+  })
 }

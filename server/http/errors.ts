@@ -43,9 +43,12 @@ function toAppError(error: unknown): AppError {
   if (error instanceof AppError) return error
   if (isDatabaseUnavailable(error))
     return new AppError(503, 'database_unavailable', 'The database is not reachable right now; try again shortly')
-  const e = error as { type?: string; status?: number; name?: string }
+  const e = error as { type?: string; status?: number; name?: string; expose?: boolean; message?: string }
   if (e?.type === 'entity.parse.failed') return new AppError(400, 'malformed_json', 'The request body is not valid JSON')
   if (e?.type === 'entity.too.large') return new AppError(413, 'too_large', 'The request body is too large')
+  // Other client faults the body reader names itself (an unsupported charset or encoding, say).
+  if (e?.expose && e.status && e.status >= 400 && e.status < 500)
+    return new AppError(e.status, 'unreadable_request', `The request could not be read: ${e.message ?? 'unsupported body'}`)
   if (e?.name === 'SequelizeUniqueConstraintError')
     return new AppError(409, 'duplicate', 'A record with the same identifying value already exists')
   return new AppError(500, 'internal_error', 'Something went wrong on the server; the problem has been logged')

@@ -55,6 +55,12 @@ describe('validation errors change nothing', () => {
     expect(res.body.error.code).toBe('malformed_json')
   })
 
+  it('when the body is in a charset the server does not read, then it answers 415 in the error shape, not 500', async () => {
+    const res = await td.agent.post('/api/v1/linesets').set('X-CSRF-Token', td.csrfToken).set('content-type', 'application/json; charset=iso-8859-1').send('{}')
+    expect(res.status, JSON.stringify(res.body)).toBe(415)
+    expect(res.body.error.code).toBe('unreadable_request')
+  })
+
   it('when a brick type has a fractional count, then it answers 400 and stores nothing', async () => {
     const before = await snapshot()
     const res = await td.post('/api/v1/brick-types', { name: 'Odd', material: 'Steel', unitWeight: 0, thickness: 2, quantityOwned: 2.5 })

@@ -2,34 +2,15 @@ import { afterEach, describe, expect, it } from 'vitest'
 import { flushPromises, type VueWrapper } from '@vue/test-utils'
 import { linesetInputSchema, type LinesetInput } from '../../shared/schemas/index.js'
 import LinesetForm from '../../src/components/LinesetForm.vue'
+import { lineset } from './fixtures'
 import { mountWithApp } from './mount'
 
-/** A complete single-purchase set in imperial figures (made up for the test). */
-const counterweightSet: LinesetInput = {
-  number: 12,
-  name: 'Main drape',
-  kind: 'counterweight-single',
-  status: 'in-service',
-  distanceFromPlasterLine: 6.5,
-  battenLength: 40,
+/** A complete single-purchase set in imperial figures: the shared made-up fixture with hand-entered pipe figures. */
+const { id: _id, version: _version, updatedAt: _updatedAt, ...counterweightSet } = lineset({
   pipeSize: 'custom',
-  pipeWeightPerLength: 2.72,
   pipeMomentOfInertia: 0.31,
   pipeSectionModulus: 0.326,
-  pickPoints: [5, 15, 25, 35],
-  liftLineWeightPerLength: null,
-  liftLineBreakingStrength: null,
-  arborEmptyWeight: 90,
-  arborCapacity: 1200,
-  arborStackLength: null,
-  ratedLoad: 1000,
-  pipeWeight: 110,
-  travel: null,
-  sandbagWeight: null,
-  hoistRatedCapacity: null,
-  hoistSpeed: null,
-  notes: '',
-}
+})
 
 let wrapper: VueWrapper | undefined
 afterEach(() => wrapper?.unmount())

@@ -1,41 +1,19 @@
-import { mkdirSync } from 'node:fs'
 import { join } from 'node:path'
-import type { BrowserContext, Page } from 'playwright-core'
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import type { Page } from 'playwright-core'
+import { describe, expect, it } from 'vitest'
 import { runCalculation } from '../../shared/engine/calculate.js'
 import { linesetCalculationInput } from '../../shared/hang/lineset-calculation.js'
 import type { Lineset } from '../../shared/schemas/lineset.js'
-import { seedDemoIfEmpty } from '../../server/db/seeders/demo.js'
 import { DEMO_BRICK_TYPES, DEMO_LINESETS } from '../../server/db/seeders/demo-linesets.js'
 import { DEMO_PASSWORD } from '../../server/db/seeders/demo-people.js'
-import { buildClientIfStale } from '../../scripts/lib/client-build.js'
-import { projectRoot } from '../../scripts/lib/paths.js'
-import { launchChromium } from '../support/browser.js'
-import { startTestApp, type TestApp } from '../support/test-app.js'
+import { artifacts, demoInBrowser } from '../support/demo-in-browser.js'
 
-const artifacts = join(projectRoot, 'tests', 'artifacts')
-let app: TestApp
-let chromium: Awaited<ReturnType<typeof launchChromium>>
-let context: BrowserContext
-
-beforeAll(async () => {
-  const clientDir = join(projectRoot, 'dist')
-  await buildClientIfStale(clientDir)
-  app = await startTestApp({ env: { CLIENT_DIR: clientDir } })
-  await seedDemoIfEmpty(app.handle.db)
-  chromium = await launchChromium()
-  context = chromium.context
-  mkdirSync(artifacts, { recursive: true })
-})
-afterAll(async () => {
-  await chromium?.close()
-  await app?.stop()
-})
+const suite = demoInBrowser()
 
 async function signIn(email: string): Promise<Page> {
-  await context.clearCookies() // one browser profile, a fresh session per person
-  const page = await context.newPage()
-  await page.goto(app.url)
+  await suite.context.clearCookies() // one browser profile, a fresh session per person
+  const page = await suite.context.newPage()
+  await page.goto(suite.app.url)
   await page.locator('[data-testid=sign-in-email] input').fill(email)
   await page.locator('[data-testid=sign-in-password] input').fill(DEMO_PASSWORD)
   await page.locator('[data-testid=sign-in-password] input').press('Enter')

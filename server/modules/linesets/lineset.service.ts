@@ -57,7 +57,7 @@ export async function updateLineset(db: Database, actor: SessionUser, id: string
     if (count === 0) throw staleVersion(`Lineset ${body.number}`)
     await appendLinesetEvent(db, { venueId: actor.venueId, linesetId: id, actorId: actor.id, eventType: 'lineset-changed', payload: { unitSystem: system, lineset: fields } }, transaction)
   })
-  return getLineset(db, actor, id)
+  return linesetToApi(await findOwn(db, actor, id), system)
 }
 
 /** Takes a lineset out of the lists; its ledger stays. */

@@ -5,18 +5,14 @@ import { runCalculation } from '../../shared/engine/calculate.js'
 import { linesetCalculationInput } from '../../shared/hang/lineset-calculation.js'
 import type { Lineset } from '../../shared/schemas/lineset.js'
 import { DEMO_BRICK_TYPES, DEMO_LINESETS } from '../../server/db/seeders/demo-linesets.js'
-import { DEMO_PASSWORD } from '../../server/db/seeders/demo-people.js'
-import { artifacts, demoInBrowser } from '../support/demo-in-browser.js'
+import { artifacts, demoInBrowser, signInOnPage } from '../support/demo-in-browser.js'
 
 const suite = demoInBrowser()
 
 async function signIn(email: string): Promise<Page> {
   await suite.context.clearCookies() // one browser profile, a fresh session per person
   const page = await suite.context.newPage()
-  await page.goto(suite.app.url)
-  await page.locator('[data-testid=sign-in-email] input').fill(email)
-  await page.locator('[data-testid=sign-in-password] input').fill(DEMO_PASSWORD)
-  await page.locator('[data-testid=sign-in-password] input').press('Enter')
+  await signInOnPage(page, suite.app.url, email)
   await page.locator('[data-testid=linesets-row-1]').waitFor()
   return page
 }
@@ -30,7 +26,9 @@ describe('the crew at work', () => {
     await page.locator('[data-testid=lineset-save]').click()
     await page.locator('[data-testid=lineset-saved]').waitFor()
     await page.reload()
-    await expect.poll(() => page.locator('[data-testid=lineset-field-name] input').inputValue()).toBe('Border 1 (rehung)')
+    await expect
+      .poll(() => page.locator('[data-testid=lineset-field-name] input').inputValue())
+      .toBe('Border 1 (rehung)')
     expect(await page.locator('[data-testid=nav-people]').count()).toBe(0)
     await page.close()
   })
@@ -64,10 +62,36 @@ describe('the crew at work', () => {
 
     // What the same shared code gives for the demo lineset 1 with that item.
     const demo = DEMO_LINESETS[0]!
-    const lineset = { id: 'x', version: 0, updatedAt: '', distanceFromPlasterLine: null, pipeMomentOfInertia: null, pipeSectionModulus: null, liftLineWeightPerLength: null, liftLineBreakingStrength: null, arborEmptyWeight: null, arborCapacity: null, arborStackLength: null, ratedLoad: null, pipeWeight: null, travel: null, sandbagWeight: null, hoistRatedCapacity: null, hoistSpeed: null, ...demo } as Lineset
-    const venue = { unitSystem: 'imperial' as const, balanceTolerance: 10, ropeLockHolding: 50, wireRopeDesignFactor: 8 }
+    const lineset = {
+      id: 'x',
+      version: 0,
+      updatedAt: '',
+      distanceFromPlasterLine: null,
+      pipeMomentOfInertia: null,
+      pipeSectionModulus: null,
+      liftLineWeightPerLength: null,
+      liftLineBreakingStrength: null,
+      arborEmptyWeight: null,
+      arborCapacity: null,
+      arborStackLength: null,
+      ratedLoad: null,
+      pipeWeight: null,
+      travel: null,
+      sandbagWeight: null,
+      hoistRatedCapacity: null,
+      hoistSpeed: null,
+      ...demo,
+    } as Lineset
+    const venue = {
+      unitSystem: 'imperial' as const,
+      balanceTolerance: 10,
+      ropeLockHolding: 50,
+      wireRopeDesignFactor: 8,
+    }
     const brickTypes = DEMO_BRICK_TYPES.map((b) => ({ ...b }))
-    const outcome = runCalculation(linesetCalculationInput({ lineset, venue, brickTypes, items: [{ label: 'Show drop', weight: 200, at: 24 }] }))
+    const outcome = runCalculation(
+      linesetCalculationInput({ lineset, venue, brickTypes, items: [{ label: 'Show drop', weight: 200, at: 24 }] }),
+    )
     if (!outcome.ok) throw new Error(JSON.stringify(outcome.error))
     const planned = outcome.result.counterweight!.bricks.filter((b) => b.count > 0)
     expect(planned.length).toBeGreaterThan(0)
@@ -77,7 +101,9 @@ describe('the crew at work', () => {
     for (const brick of planned) await expect.poll(() => plan.innerText()).toContain(`${brick.count} × ${brick.name}`)
     await expect.poll(() => page.locator('[data-testid=balance-cautions]').innerText()).toMatch(/qualified person/)
     expect(await page.locator('[data-testid=lineset-save]').count()).toBe(0)
-    await page.locator('[data-testid=balance-panel]').screenshot({ path: join(artifacts, 'fly-operator-try-a-hang.png') })
+    await page
+      .locator('[data-testid=balance-panel]')
+      .screenshot({ path: join(artifacts, 'fly-operator-try-a-hang.png') })
     await page.close()
   })
 })

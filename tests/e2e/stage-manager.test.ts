@@ -2,8 +2,7 @@ import { join } from 'node:path'
 import type { Page } from 'playwright-core'
 import { describe, expect, it } from 'vitest'
 import { DEMO_LINESETS } from '../../server/db/seeders/demo-linesets.js'
-import { DEMO_PASSWORD } from '../../server/db/seeders/demo-people.js'
-import { artifacts, demoInBrowser } from '../support/demo-in-browser.js'
+import { artifacts, demoInBrowser, signInOnPage } from '../support/demo-in-browser.js'
 
 const suite = demoInBrowser()
 const foreignRequests: string[] = []
@@ -11,12 +10,10 @@ const foreignRequests: string[] = []
 async function signIn(page: Page, email: string) {
   page.on('request', (request) => {
     const url = new URL(request.url())
-    if (!['127.0.0.1', 'localhost'].includes(url.hostname) && url.protocol.startsWith('http')) foreignRequests.push(request.url())
+    if (!['127.0.0.1', 'localhost'].includes(url.hostname) && url.protocol.startsWith('http'))
+      foreignRequests.push(request.url())
   })
-  await page.goto(suite.app.url)
-  await page.locator('[data-testid=sign-in-email] input').fill(email)
-  await page.locator('[data-testid=sign-in-password] input').fill(DEMO_PASSWORD)
-  await page.locator('[data-testid=sign-in-submit]').click()
+  await signInOnPage(page, suite.app.url, email)
 }
 
 describe('the stage manager reads the linesets before a run', () => {
@@ -36,9 +33,9 @@ describe('the stage manager reads the linesets before a run', () => {
 
     // The filter narrows the table to what the stage manager types.
     await page.locator('[data-testid=linesets-filter] input').fill('electric')
-    await expect.poll(async () => (await page.locator('[data-testid^=linesets-row-]').allInnerTexts()).length).toBe(
-      DEMO_LINESETS.filter((l) => /electric/i.test(l.name)).length,
-    )
+    await expect
+      .poll(async () => (await page.locator('[data-testid^=linesets-row-]').allInnerTexts()).length)
+      .toBe(DEMO_LINESETS.filter((l) => /electric/i.test(l.name)).length)
     expect(foreignRequests).toEqual([])
     await page.close()
   })

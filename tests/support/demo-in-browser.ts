@@ -1,8 +1,9 @@
 import { mkdirSync } from 'node:fs'
 import { join } from 'node:path'
-import type { BrowserContext } from 'playwright-core'
+import type { BrowserContext, Page } from 'playwright-core'
 import { afterAll, beforeAll } from 'vitest'
 import { seedDemoIfEmpty } from '../../server/db/seeders/demo.js'
+import { DEMO_PASSWORD } from '../../server/db/seeders/demo-people.js'
 import { buildClientIfStale } from '../../scripts/lib/client-build.js'
 import { projectRoot } from '../../scripts/lib/paths.js'
 import { launchChromium } from './browser.js'
@@ -31,4 +32,16 @@ export function demoInBrowser() {
     await suite.app?.stop()
   })
   return suite
+}
+
+/**
+ * Opens the app on `page` and signs in as a demo person. It waits until the sign-in page says it is ready
+ * (its one-time focus is done), so nothing can move the caret while the fields are typed.
+ */
+export async function signInOnPage(page: Page, url: string, email: string, password = DEMO_PASSWORD) {
+  await page.goto(url)
+  await page.locator('[data-testid=sign-in-form][data-ready=true]').waitFor()
+  await page.locator('[data-testid=sign-in-email] input').fill(email)
+  await page.locator('[data-testid=sign-in-password] input').fill(password)
+  await page.locator('[data-testid=sign-in-submit]').click()
 }

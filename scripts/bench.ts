@@ -10,7 +10,12 @@ function batten(length: number, lines: number, items: number) {
   const pickPoints = Array.from({ length: lines }, (_, k) => (k * length) / (lines - 1))
   const hung = Array.from({ length: items }, (_, k) =>
     k % 5 === 4
-      ? { label: `cable ${k}`, weightPerLength: 0.5 + (k % 3), from: round2((k * 0.37) % (length / 2)), to: round2(length / 2 + ((k * 0.41) % (length / 2))) }
+      ? {
+          label: `cable ${k}`,
+          weightPerLength: 0.5 + (k % 3),
+          from: round2((k * 0.37) % (length / 2)),
+          to: round2(length / 2 + ((k * 0.41) % (length / 2))),
+        }
       : { label: `fixture ${k}`, weight: 12 + (k % 7) * 3.5, at: Math.round(((k * 7.3) % length) * 100) / 100 },
   )
   return calculationInputSchema.parse({
@@ -19,7 +24,10 @@ function batten(length: number, lines: number, items: number) {
     batten: { length, pickPoints, pipeSize: 'nps-1-1/2-sch40' },
     items: hung,
     arbor: { emptyWeight: 90, capacity: 2000, stackLength: 60 },
-    bricks: [{ name: 'full', weight: 20, thickness: 2, available: 80 }, { name: 'half', weight: 10, thickness: 1, available: 10 }],
+    bricks: [
+      { name: 'full', weight: 20, thickness: 2, available: 80 },
+      { name: 'half', weight: 10, thickness: 1, available: 10 },
+    ],
     liftLine: { weightPerLength: 0.11, breakingStrength: 7000, designFactor: 8 },
     tolerance: 10,
     trims: { in: 4, out: 50 },

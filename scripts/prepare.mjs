@@ -9,6 +9,8 @@ import { fileURLToPath } from 'node:url'
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..')
 const wantsBrowser = process.argv.includes('--browser')
+// --packages-only: just the npm packages, for the type, lint and format checks that run before the tests.
+const packagesOnly = process.argv.includes('--packages-only')
 const isRoot = process.getuid?.() === 0
 
 function fail(message) {
@@ -44,7 +46,9 @@ function aptInstall(packages, why) {
 function findPostgresBin() {
   const base = '/usr/lib/postgresql'
   if (!existsSync(base)) return null
-  const versions = readdirSync(base).filter((v) => existsSync(join(base, v, 'bin', 'postgres'))).sort((a, b) => Number(b) - Number(a))
+  const versions = readdirSync(base)
+    .filter((v) => existsSync(join(base, v, 'bin', 'postgres')))
+    .sort((a, b) => Number(b) - Number(a))
   return versions.length ? join(base, versions[0], 'bin') : null
 }
 
@@ -66,5 +70,7 @@ function ensureChromium() {
 }
 
 ensureNodeModules()
-ensurePostgres()
-if (wantsBrowser) ensureChromium()
+if (!packagesOnly) {
+  ensurePostgres()
+  if (wantsBrowser) ensureChromium()
+}

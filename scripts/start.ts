@@ -29,7 +29,10 @@ async function main() {
   loadDotEnv()
   const host = process.env.HOST ?? '127.0.0.1'
   const port = Number(process.env.PORT ?? 3000)
-  if (!(await portIsFree(host, port))) throw new ListenError(`Port ${port} on ${host} is already in use; stop whatever uses it or set PORT to another port`)
+  if (!(await portIsFree(host, port)))
+    throw new ListenError(
+      `Port ${port} on ${host} is already in use; stop whatever uses it or set PORT to another port`,
+    )
 
   let cluster: Cluster | null = null
   if (!process.env.DATABASE_URL) {
@@ -48,7 +51,8 @@ async function main() {
     const config = loadConfig({ ...process.env, CLIENT_DIR: process.env.CLIENT_DIR ?? join(projectRoot, 'dist') })
     const setup = connectDatabase(config.databaseUrl)
     await migrate(setup.sequelize, config.databaseUrl)
-    if (await seedDemoIfEmpty({ sequelize: setup.sequelize, models: defineModels(setup.sequelize) })) say('seeded the demo venue')
+    if (await seedDemoIfEmpty({ sequelize: setup.sequelize, models: defineModels(setup.sequelize) }))
+      say('seeded the demo venue')
     await setup.close()
     if (await buildClientIfStale(config.clientDir)) say('built the client')
 
@@ -77,6 +81,8 @@ async function main() {
 }
 
 main().catch((error) => {
-  console.error(`loftledger: ${error instanceof ListenError ? error.message : error instanceof Error ? error.message : String(error)}`)
+  console.error(
+    `loftledger: ${error instanceof ListenError ? error.message : error instanceof Error ? error.message : String(error)}`,
+  )
   process.exit(1)
 })

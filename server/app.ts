@@ -23,7 +23,8 @@ export interface AppHandle {
   close(): Promise<void>
 }
 
-const log = (error: unknown) => console.error('loftledger:', error instanceof Error ? (error.stack ?? error.message) : error)
+const log = (error: unknown) =>
+  console.error('loftledger:', error instanceof Error ? (error.stack ?? error.message) : error)
 
 /** Builds the whole app (API and, when configured, the built client) on one database. Holds no state of its own. */
 export function createApp(config: Config): AppHandle {
@@ -72,5 +73,12 @@ export function createApp(config: Config): AppHandle {
   }
   app.use(errorHandler(log))
 
-  return { app, db, close: async () => { await sessions.close(); await connections.close() } }
+  return {
+    app,
+    db,
+    close: async () => {
+      await sessions.close()
+      await connections.close()
+    },
+  }
 }

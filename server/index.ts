@@ -19,8 +19,14 @@ function listen(handle: AppHandle, host: string, port: number): Promise<Server> 
     const server = handle.app.listen(port, host)
     server.once('listening', () => resolve(server))
     server.once('error', (error: NodeJS.ErrnoException) => {
-      if (error.code === 'EADDRINUSE') reject(new ListenError(`Port ${port} on ${host} is already in use; stop whatever uses it or set PORT to another port`))
-      else if (error.code === 'EACCES') reject(new ListenError(`Not allowed to listen on port ${port}; choose a port above 1024 with PORT`))
+      if (error.code === 'EADDRINUSE')
+        reject(
+          new ListenError(
+            `Port ${port} on ${host} is already in use; stop whatever uses it or set PORT to another port`,
+          ),
+        )
+      else if (error.code === 'EACCES')
+        reject(new ListenError(`Not allowed to listen on port ${port}; choose a port above 1024 with PORT`))
       else reject(error)
     })
   })

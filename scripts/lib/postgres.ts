@@ -30,11 +30,10 @@ export interface Cluster {
 /** Where PostgreSQL's server binaries are; Debian keeps one folder per major version. */
 export function postgresBinDir(): string {
   const base = '/usr/lib/postgresql'
-  const versions = existsSync(base)
-    ? readdirSync(base).filter((v) => existsSync(join(base, v, 'bin', 'postgres')))
-    : []
+  const versions = existsSync(base) ? readdirSync(base).filter((v) => existsSync(join(base, v, 'bin', 'postgres'))) : []
   const newest = versions.sort((a, b) => Number(b) - Number(a))[0]
-  if (!newest) throw new Error("PostgreSQL's server is not installed (run `npm start` as root, or apt-get install postgresql)")
+  if (!newest)
+    throw new Error("PostgreSQL's server is not installed (run `npm start` as root, or apt-get install postgresql)")
   return join(base, newest, 'bin')
 }
 
@@ -125,12 +124,24 @@ export function startCluster(options: ClusterOptions): { cluster: Cluster; start
     const settings = [`-c listen_addresses=127.0.0.1`, `-p ${options.port}`, `-k ${root}`]
     if (options.fast) settings.push('-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off')
     // pg_ctl puts the server in a session of its own, so a Ctrl-C at the terminal reaches only us; we stop it.
-    const result = runPg('pg_ctl', ['-D', dataDir, '-l', join(root, 'server.log'), '-w', '-t', '60', '-o', settings.join(' '), 'start'])
+    const result = runPg('pg_ctl', [
+      '-D',
+      dataDir,
+      '-l',
+      join(root, 'server.log'),
+      '-w',
+      '-t',
+      '60',
+      '-o',
+      settings.join(' '),
+      'start',
+    ])
     if (!result.ok) throw new Error(`PostgreSQL did not start (see ${join(root, 'server.log')}):\n${result.output}`)
     started = true
   }
   const port = runningPort(dataDir) ?? options.port
-  const secret = options.password && existsSync(passwordFile(root)) ? readFileSync(passwordFile(root), 'utf8').trim() : ''
+  const secret =
+    options.password && existsSync(passwordFile(root)) ? readFileSync(passwordFile(root), 'utf8').trim() : ''
   const auth = secret ? `postgres:${encodeURIComponent(secret)}` : 'postgres'
   const urlFor = (database: string) => `postgres://${auth}@127.0.0.1:${port}/${database}`
   return { cluster: { root, dataDir, port, adminUrl: urlFor('postgres'), urlFor }, started }

@@ -10,7 +10,11 @@ export function createMigrator(sequelize: Sequelize) {
   const context: QueryInterface = sequelize.getQueryInterface()
   const inTransaction = (sql: string) => sequelize.transaction((transaction) => sequelize.query(sql, { transaction }))
   return new Umzug({
-    migrations: migrations.map((m) => ({ name: m.name, up: () => inTransaction(m.up), down: () => inTransaction(m.down) })),
+    migrations: migrations.map((m) => ({
+      name: m.name,
+      up: () => inTransaction(m.up),
+      down: () => inTransaction(m.down),
+    })),
     context,
     storage: new SequelizeStorage({ sequelize, tableName: 'schema_migrations' }),
     logger: undefined,

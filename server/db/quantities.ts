@@ -27,12 +27,18 @@ export function toStoredFields<M extends QuantityMap<string>>(
   system: UnitSystem,
 ) {
   const out = {} as { [K in keyof M]: string | null }
-  for (const field of Object.keys(map) as (keyof M & string)[]) out[field] = storedFromApi(body[field], map[field]!, system)
+  for (const field of Object.keys(map) as (keyof M & string)[])
+    out[field] = storedFromApi(body[field], map[field]!, system)
   return out
 }
 
-export function toApiFields<M extends QuantityMap<string>>(map: M, row: { [K in keyof M]: string | null }, system: UnitSystem) {
+export function toApiFields<M extends QuantityMap<string>>(
+  map: M,
+  row: { [K in keyof M]: string | null },
+  system: UnitSystem,
+) {
   const out = {} as { [K in keyof M]: number | null }
-  for (const field of Object.keys(map) as (keyof M & string)[]) out[field] = apiFromStored(row[field], map[field]!, system)
+  for (const field of Object.keys(map) as (keyof M & string)[])
+    out[field] = apiFromStored(row[field], map[field]!, system)
   return out
 }

@@ -7,6 +7,7 @@ declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     // passport's req.user is the signed-in member of one venue.
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type
     interface User extends SessionUser {}
   }
 }

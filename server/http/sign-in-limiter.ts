@@ -13,6 +13,12 @@ export function signInLimiter(sequelize: Sequelize, attempts: number) {
     legacyHeaders: false,
     store: new PostgresRateLimitStore(sequelize, 'sign-in'),
     handler: (_req, _res, next) =>
-      next(new AppError(429, 'too_many_attempts', 'Too many failed sign-ins from this address; wait a minute and try again')),
+      next(
+        new AppError(
+          429,
+          'too_many_attempts',
+          'Too many failed sign-ins from this address; wait a minute and try again',
+        ),
+      ),
   })
 }

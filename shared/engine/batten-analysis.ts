@@ -43,7 +43,8 @@ export interface BattenAnalysis {
 export function analyseBatten(input: CalculationInput): BattenAnalysis {
   const { batten, units } = input
   const pipe = resolvePipe(batten, units)
-  const selfWeightPerLength = batten.weightPerLength === undefined ? pipe?.weightPerLength ?? Dec(0) : Dec(batten.weightPerLength)
+  const selfWeightPerLength =
+    batten.weightPerLength === undefined ? (pipe?.weightPerLength ?? Dec(0)) : Dec(batten.weightPerLength)
   const loads = collectLoads(input, selfWeightPerLength)
   // The model converts and totals the items in the same pass that places them.
   const model = buildBattenModel(loads.beam)
@@ -74,7 +75,8 @@ function collectLoads(input: CalculationInput, selfWeightPerLength: Decimal) {
   const spreads: BattenLoads['spreads'] = []
   for (const item of input.items) {
     if (item.at !== undefined && item.weight !== undefined) points.push({ at: item.at, weight: item.weight })
-    else if (item.weightPerLength !== undefined) spreads.push({ from: item.from ?? 0, to: item.to ?? batten.length, weightPerLength: item.weightPerLength })
+    else if (item.weightPerLength !== undefined)
+      spreads.push({ from: item.from ?? 0, to: item.to ?? batten.length, weightPerLength: item.weightPerLength })
   }
   const hardwareWeight = Dec(input.hardwareWeight ?? 0)
   const atEachLine = hardwareWeight.isZero() ? undefined : hardwareWeight.div(batten.pickPoints.length)
@@ -89,6 +91,10 @@ function toLengths(figures: ReturnType<typeof battenDeflections>, pipe: PipeProp
   const length = deflectionConverter(pipe.elasticModulus, pipe.momentOfInertia, units)
   return {
     spans: figures.spans.map(({ from, to, drop, at }) => ({ from, to, max: length(drop), at })),
-    overhangs: figures.overhangs.map(({ end, length: overhang, drop }) => ({ end, length: overhang, tip: length(drop) })),
+    overhangs: figures.overhangs.map(({ end, length: overhang, drop }) => ({
+      end,
+      length: overhang,
+      tip: length(drop),
+    })),
   }
 }

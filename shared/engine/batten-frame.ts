@@ -35,8 +35,16 @@ export interface BattenFrame {
 /** Where a position falls: on a line, or in a region at u (and u as a number). */
 export type Place = { line: number } | { region: RegionDraft; u: Decimal; float: number }
 
-const draft = (length: Decimal, origin: Decimal, originNumber: number, outward: boolean): RegionDraft =>
-  ({ length, lengthFloat: floatOf(length), points: [], spreads: [], steps: [], origin, originDigits: numberDigits(originNumber), outward })
+const draft = (length: Decimal, origin: Decimal, originNumber: number, outward: boolean): RegionDraft => ({
+  length,
+  lengthFloat: floatOf(length),
+  points: [],
+  spreads: [],
+  steps: [],
+  origin,
+  originDigits: numberDigits(originNumber),
+  outward,
+})
 
 /**
  * The empty regions of a batten hung from its pick points.
@@ -76,7 +84,8 @@ export function place(frame: BattenFrame, x: number): Place {
   if (region === start && x === 0) return { region, u: region.length, float: region.lengthFloat }
   if (region === end && x === frame.lengthNumber) return { region, u: region.length, float: region.lengthFloat }
   // Most positions are short figures: u straight from integers, one decimal made, none subtracted.
-  const u = (region.originDigits && exactOffset(x, region.originDigits, region.outward)) ??
+  const u =
+    (region.originDigits && exactOffset(x, region.originDigits, region.outward)) ??
     (region.outward ? region.origin.minus(Dec(x)) : Dec(x).minus(region.origin))
   return { region, u, float: floatOf(u) }
 }

@@ -10,7 +10,11 @@ import { exactOffset, numberDigits } from './exact-offset.js'
  * A weight at a point, located within its region (see {@link Region}). `float` holds the same
  * figures as numbers for the floating-point searches (location only), converted once.
  */
-export interface LocalPoint { u: Decimal; weight: Decimal; float: { u: number; weight: number } }
+export interface LocalPoint {
+  u: Decimal
+  weight: Decimal
+  float: { u: number; weight: number }
+}
 /** A uniform weight per length from u1 to u2 within its region, with its float twin. */
 export interface LocalSpread {
   u1: Decimal
@@ -24,7 +28,12 @@ export interface LocalSpread {
  * or an overhang beyond an end line (u measured outward from that line). Loads keep the
  * input order (the float searches depend on it); `sums` holds them in order of position.
  */
-export interface Region { length: Decimal; points: LocalPoint[]; spreads: LocalSpread[]; sums: LoadSums }
+export interface Region {
+  length: Decimal
+  points: LocalPoint[]
+  spreads: LocalSpread[]
+  sums: LoadSums
+}
 
 /** What the beam analysis needs: lines, loads sorted into regions, totals. */
 export interface BattenModel {
@@ -88,7 +97,8 @@ export function buildBattenModel(loads: BattenLoads): BattenModel {
     const weight = decimal(point.weight)
     const where = place(frame, point.at)
     if ('line' in where) direct[where.line] = direct[where.line]!.plus(weight)
-    else where.region.points.push({ u: where.u, weight, float: { u: where.float, weight: toFloat(point.weight, weight) } })
+    else
+      where.region.points.push({ u: where.u, weight, float: { u: where.float, weight: toFloat(point.weight, weight) } })
   }
   // The batten's own weight goes first, as the float searches have always seen it.
   if (loads.selfWeightPerLength !== undefined) {
@@ -107,7 +117,8 @@ export function buildBattenModel(loads: BattenLoads): BattenModel {
     direct.forEach((d, k) => (direct[k] = d.plus(share)))
   }
   const regions = sumRegions(frame)
-  for (const region of [regions.startOverhang, ...regions.spans, regions.endOverhang]) itemsWeight = itemsWeight.plus(totalSums(region.sums).points[0]!)
+  for (const region of [regions.startOverhang, ...regions.spans, regions.endOverhang])
+    itemsWeight = itemsWeight.plus(totalSums(region.sums).points[0]!)
   return { length: frame.length, supports: frame.supports, direct, ...regions, itemsWeight }
 }
 

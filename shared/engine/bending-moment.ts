@@ -5,7 +5,10 @@ import type { BeamSolution } from './continuous-beam.js'
 import { sumsBefore } from './region-loads.js'
 
 /** The largest bending moment by magnitude (sagging positive) and where it acts. */
-export interface PeakMoment { value: Decimal; at: Decimal }
+export interface PeakMoment {
+  value: Decimal
+  at: Decimal
+}
 
 const TWO = Dec(2)
 // x·0.5 rounds the same real number as x/2, at a fraction of a division's cost.
@@ -36,18 +39,32 @@ export function peakMoment(model: BattenModel, solution: BeamSolution): PeakMome
   if ('line' in best) return { value: solution.supportMoments[best.line]!, at: model.supports[best.line]! }
   const u = typeof best.u === 'number' ? Dec(best.u.toFixed(9)) : best.u
   const k = best.span
-  return { value: momentInSpan(model.spans[k]!, solution.supportMoments[k]!, solution.spanStartShear[k]!, u), at: model.supports[k]!.plus(u) }
+  return {
+    value: momentInSpan(model.spans[k]!, solution.supportMoments[k]!, solution.spanStartShear[k]!, u),
+    at: model.supports[k]!.plus(u),
+  }
 }
 
 function spanPeak(span: Region, startMoment: number, startShear: number): { magnitude: number; u: number | Decimal } {
-  const events: Array<{ u: number; exact: Decimal; point: number; intensity: number }> = span.points.map((p) => ({ u: p.float.u, exact: p.u, point: p.float.weight, intensity: 0 }))
+  const events: Array<{ u: number; exact: Decimal; point: number; intensity: number }> = span.points.map((p) => ({
+    u: p.float.u,
+    exact: p.u,
+    point: p.float.weight,
+    intensity: 0,
+  }))
   for (const s of span.spreads) {
     const w = s.float.weightPerLength
-    events.push({ u: s.float.u1, exact: s.u1, point: 0, intensity: w }, { u: s.float.u2, exact: s.u2, point: 0, intensity: -w })
+    events.push(
+      { u: s.float.u1, exact: s.u1, point: 0, intensity: w },
+      { u: s.float.u2, exact: s.u2, point: 0, intensity: -w },
+    )
   }
   events.sort((a, b) => a.u - b.u)
   let best: { magnitude: number; u: number | Decimal } = { magnitude: -1, u: 0 }
-  let shear = startShear, moment = startMoment, intensity = 0, position = 0
+  let shear = startShear,
+    moment = startMoment,
+    intensity = 0,
+    position = 0
   const advance = (to: number) => {
     const h = to - position
     if (intensity > 0 && shear > 0 && shear / intensity < h) {

@@ -2,13 +2,24 @@ import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
 
 /** A venue's brick type and how many are free to load. */
-export interface BrickStock { name: string; weight: number; thickness: number; available: number }
+export interface BrickStock {
+  name: string
+  weight: number
+  thickness: number
+  available: number
+}
 
 /**
  * Counts per brick type (in stock order) and what they add up to. `complete` is false when the search
  * hit its work limit: the plan still fits stock, capacity and stack, but a closer one may exist.
  */
-export interface BrickPlan { counts: number[]; loaded: Decimal; stackUsed: Decimal; bricks: number; complete: boolean }
+export interface BrickPlan {
+  counts: number[]
+  loaded: Decimal
+  stackUsed: Decimal
+  bricks: number
+  complete: boolean
+}
 
 /**
  * How many partial plans the search may try. Ordinary stocks finish in a few thousand; this bound keeps an
@@ -16,7 +27,12 @@ export interface BrickPlan { counts: number[]; loaded: Decimal; stackUsed: Decim
  */
 export const BRICK_PLAN_WORK_LIMIT = 200_000
 
-interface Scaled { weight: number; thickness: number; available: number; index: number }
+interface Scaled {
+  weight: number
+  thickness: number
+  available: number
+  index: number
+}
 
 /**
  * The heaviest load of bricks not above `limit` (so the set stays balanced or batten heavy), with the
@@ -42,7 +58,11 @@ export function planBricks(stock: readonly BrickStock[], limit: Decimal.Value, s
     .sort((a, b) => b.weight - a.weight || a.thickness - b.thickness)
   const divisor = types.reduce((g, t) => greatestCommonDivisor(g, t.weight), 0) || 1
   const rawLimit = Dec.max(0, Dec(limit).times(weightScale).floor()).toNumber()
-  const best = search(types, rawLimit - (rawLimit % divisor), Dec.max(0, Dec(stackRoom).times(thicknessScale).floor()).toNumber())
+  const best = search(
+    types,
+    rawLimit - (rawLimit % divisor),
+    Dec.max(0, Dec(stackRoom).times(thicknessScale).floor()).toNumber(),
+  )
   const counts = stock.map(() => 0)
   best.counts.forEach((count, k) => (counts[types[k]!.index] = count))
   const loaded = stock.reduce((sum, b, i) => sum.plus(Dec(b.weight).times(counts[i]!)), Dec(0))

@@ -49,7 +49,12 @@ export function calculate(input: CalculationInput): CalculationResult {
     result.lineWorkingLoadLimit = r(workingLoadLimit(input.liftLine.breakingStrength, input.liftLine.designFactor))
   if (analysis.bending) {
     const { stress, allowable } = analysis.bending
-    result.bending = { stress: r(stress), allowable: r(allowable), utilisation: roundTo(stress.div(allowable), 4), basis: 'nominal wall; allowable 0.66 × Fy' }
+    result.bending = {
+      stress: r(stress),
+      allowable: r(allowable),
+      utilisation: roundTo(stress.div(allowable), 4),
+      basis: 'nominal wall; allowable 0.66 × Fy',
+    }
   }
   if (analysis.deflection) {
     result.deflection = {
@@ -68,7 +73,9 @@ export function calculate(input: CalculationInput): CalculationResult {
  * @example
  * runCalculation({ units: 'furlongs' }) // { ok: false, error: { error: { code: 'validation_failed', ... } } }
  */
-export function runCalculation(raw: unknown): { ok: true; result: CalculationResult } | { ok: false; error: ErrorBody } {
+export function runCalculation(
+  raw: unknown,
+): { ok: true; result: CalculationResult } | { ok: false; error: ErrorBody } {
   const parsed = calculationInputSchema.safeParse(raw)
   if (!parsed.success) return { ok: false, error: validationErrorBody(parsed.error.issues) }
   return { ok: true, result: calculate(parsed.data) }

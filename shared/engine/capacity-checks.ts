@@ -12,7 +12,10 @@ export const DEFAULT_DESIGN_FACTOR = 8
  * @example
  * workingLoadLimit(7000, 8).toString() // '875'
  */
-export function workingLoadLimit(breakingStrength: Decimal.Value, designFactor: Decimal.Value = DEFAULT_DESIGN_FACTOR): Decimal {
+export function workingLoadLimit(
+  breakingStrength: Decimal.Value,
+  designFactor: Decimal.Value = DEFAULT_DESIGN_FACTOR,
+): Decimal {
   return Dec(breakingStrength).div(designFactor)
 }
 
@@ -30,18 +33,38 @@ export function lineChecks(
 ): Check[] {
   const checks: Check[] = []
   const place = (k: number) => `Lift line at ${formatQuantity(positions[k]!, 'length', units)}`
-  const limit = line?.breakingStrength === undefined ? undefined : workingLoadLimit(line.breakingStrength, line.designFactor)
+  const limit =
+    line?.breakingStrength === undefined ? undefined : workingLoadLimit(line.breakingStrength, line.designFactor)
   const weight = (value: Decimal.Value) => formatQuantity(value, 'weight', units)
   loads.forEach((load, k) => {
     if (load.lt(0))
-      checks.push(check('line-slack', 'danger', `${place(k)} would have to push up ${weight(load.neg())}: it goes slack and the batten lifts there; move load or add a line`))
+      checks.push(
+        check(
+          'line-slack',
+          'danger',
+          `${place(k)} would have to push up ${weight(load.neg())}: it goes slack and the batten lifts there; move load or add a line`,
+        ),
+      )
     else if (load.isZero()) checks.push(check('line-slack', 'danger', `${place(k)} carries no load and hangs slack`))
     if (limit && load.gt(limit)) {
       const factor = line?.designFactor ?? DEFAULT_DESIGN_FACTOR
-      checks.push(check('line-over-limit', 'danger', `${place(k)} carries ${weight(load)}, above its working load limit of ${weight(limit)} (${weight(line!.breakingStrength!)} ÷ ${factor})`))
+      checks.push(
+        check(
+          'line-over-limit',
+          'danger',
+          `${place(k)} carries ${weight(load)}, above its working load limit of ${weight(limit)} (${weight(line!.breakingStrength!)} ÷ ${factor})`,
+        ),
+      )
     }
   })
-  if (!limit) checks.push(check('line-limit-unchecked', 'info', 'No lift line breaking strength was given, so the line loads were not checked against a working load limit'))
+  if (!limit)
+    checks.push(
+      check(
+        'line-limit-unchecked',
+        'info',
+        'No lift line breaking strength was given, so the line loads were not checked against a working load limit',
+      ),
+    )
   return checks
 }
 
@@ -53,5 +76,11 @@ export function lineChecks(
  */
 export function ratedLoadChecks(totalLoad: Decimal, ratedLoad: number | undefined, units: UnitSystem): Check[] {
   if (ratedLoad === undefined || totalLoad.lte(ratedLoad)) return []
-  return [check('over-rated-load', 'danger', `The batten carries ${formatQuantity(totalLoad, 'weight', units)}, above the lineset's rated load of ${formatQuantity(ratedLoad, 'weight', units)}`)]
+  return [
+    check(
+      'over-rated-load',
+      'danger',
+      `The batten carries ${formatQuantity(totalLoad, 'weight', units)}, above the lineset's rated load of ${formatQuantity(ratedLoad, 'weight', units)}`,
+    ),
+  ]
 }

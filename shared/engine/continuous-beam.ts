@@ -37,7 +37,13 @@ export function solveContinuousBeam(model: BattenModel): BeamSolution {
     // One line: both overhangs hang from it, so compare their own moments (moments[0] and moments[n - 1] are one slot).
     const [startMoment, endMoment] = [start.moment.neg(), end.moment.neg()]
     const supportMoment = startMoment.abs().gte(endMoment.abs()) ? startMoment : endMoment
-    return { reactions: [reaction], supportMoments: [supportMoment], spanStartShear: [], spanMoments: [], unbalancedMoment: end.moment.minus(start.moment) }
+    return {
+      reactions: [reaction],
+      supportMoments: [supportMoment],
+      spanStartShear: [],
+      spanMoments: [],
+      unbalancedMoment: end.moment.minus(start.moment),
+    }
   }
   const spanMoments = model.spans.map(regionMoments)
   const spanSums = spanMoments.map(regionSums)
@@ -57,7 +63,11 @@ export function solveContinuousBeam(model: BattenModel): BeamSolution {
 }
 
 /** Thomas algorithm on M(k-1)·L(k) + 2·M(k)·(L(k) + L(k+1)) + M(k+1)·L(k+1) = -(terms). */
-function solveInteriorMoments(model: BattenModel, terms: Array<{ left: Decimal; right: Decimal }>, moments: Decimal[]): void {
+function solveInteriorMoments(
+  model: BattenModel,
+  terms: Array<{ left: Decimal; right: Decimal }>,
+  moments: Decimal[],
+): void {
   const n = model.supports.length
   const unknowns = n - 2
   if (unknowns < 1) return

@@ -51,24 +51,66 @@ export function balanceCounterweight(request: CounterweightRequest): Counterweig
   const checks: Check[] = []
   const tolerance = Dec(request.tolerance)
   if (required.gt(room))
-    checks.push(check('arbor-over-capacity', 'danger', `The arbor needs ${weight(required)} of bricks but takes only ${weight(room)} more (capacity ${weight(arbor.capacity)}${aboard.isZero() ? '' : `, ${weight(aboard)} of pipe weight already aboard`})`))
+    checks.push(
+      check(
+        'arbor-over-capacity',
+        'danger',
+        `The arbor needs ${weight(required)} of bricks but takes only ${weight(room)} more (capacity ${weight(arbor.capacity)}${aboard.isZero() ? '' : `, ${weight(aboard)} of pipe weight already aboard`})`,
+      ),
+    )
   if (required.lt(0) && outOfBalance.abs().gt(tolerance))
-    checks.push(check('arbor-heavy-empty', 'danger', `Even with no bricks the arbor side is ${weight(outOfBalance.neg())} heavier than the batten side at the batten; add weight to the batten or lighten the arbor before the set moves`))
-  else if (outOfBalance.gt(tolerance)) checks.push(shortfallCheck(request, required, room, stackRoom, plan, outOfBalance, weight))
+    checks.push(
+      check(
+        'arbor-heavy-empty',
+        'danger',
+        `Even with no bricks the arbor side is ${weight(outOfBalance.neg())} heavier than the batten side at the batten; add weight to the batten or lighten the arbor before the set moves`,
+      ),
+    )
+  else if (outOfBalance.gt(tolerance))
+    checks.push(shortfallCheck(request, required, room, stackRoom, plan, outOfBalance, weight))
   if (!plan.complete)
-    checks.push(check('brick-plan-unproven', 'caution', `The brick plan search stopped at its work limit: this plan fits the stock, capacity and stack, but a closer one may exist; check the arbor by hand`))
+    checks.push(
+      check(
+        'brick-plan-unproven',
+        'caution',
+        `The brick plan search stopped at its work limit: this plan fits the stock, capacity and stack, but a closer one may exist; check the arbor by hand`,
+      ),
+    )
   if (request.ropeLockHolding !== undefined && outOfBalance.abs().gt(request.ropeLockHolding))
-    checks.push(check('beyond-rope-lock', 'caution', `Out of balance by ${weight(outOfBalance)}, more than the rope lock's holding figure of ${weight(request.ropeLockHolding)}; the lock is not a brake`))
+    checks.push(
+      check(
+        'beyond-rope-lock',
+        'caution',
+        `Out of balance by ${weight(outOfBalance)}, more than the rope lock's holding figure of ${weight(request.ropeLockHolding)}; the lock is not a brake`,
+      ),
+    )
   return { required, plan, arborSide, outOfBalance, checks }
 }
 
 /** Why the plan falls short: the stock, the stack or the capacity (danger), or only the brick sizes (caution). */
-function shortfallCheck(request: CounterweightRequest, required: Decimal, room: Decimal, stackRoom: Decimal, plan: BrickPlan, outOfBalance: Decimal, weight: (v: Decimal.Value) => string): Check {
+function shortfallCheck(
+  request: CounterweightRequest,
+  required: Decimal,
+  room: Decimal,
+  stackRoom: Decimal,
+  plan: BrickPlan,
+  outOfBalance: Decimal,
+  weight: (v: Decimal.Value) => string,
+): Check {
   const unlimited = request.bricks.map((b) => ({ ...b, available: Dec(required).div(b.weight).ceil().toNumber() + 1 }))
   const relaxed = planBricks(unlimited, required, Dec(10).pow(12))
   const heavy = `the set stays ${weight(outOfBalance)} batten heavy, beyond the tolerance of ${weight(request.tolerance)}`
   // Only a finished search proves the sizes are the limit; otherwise say the stock may be short (danger).
-  if (relaxed.complete && !plan.loaded.lt(relaxed.loaded)) return check('out-of-balance', 'caution', `The brick sizes cannot come closer: ${heavy}`)
-  const cause = required.gt(room) ? 'the arbor capacity' : relaxed.stackUsed.gt(stackRoom) ? `the stack length (${formatQuantity(stackRoom, 'shortLength', request.units)} free)` : 'the bricks in stock'
-  return check('counterweight-short', 'danger', `The arbor needs ${weight(required)} of bricks but ${cause} allows only ${weight(plan.loaded)}: ${heavy}`)
+  if (relaxed.complete && !plan.loaded.lt(relaxed.loaded))
+    return check('out-of-balance', 'caution', `The brick sizes cannot come closer: ${heavy}`)
+  const cause = required.gt(room)
+    ? 'the arbor capacity'
+    : relaxed.stackUsed.gt(stackRoom)
+      ? `the stack length (${formatQuantity(stackRoom, 'shortLength', request.units)} free)`
+      : 'the bricks in stock'
+  return check(
+    'counterweight-short',
+    'danger',
+    `The arbor needs ${weight(required)} of bricks but ${cause} allows only ${weight(plan.loaded)}: ${heavy}`,
+  )
 }

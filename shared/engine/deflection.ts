@@ -18,7 +18,10 @@ export interface DeflectionFigures {
  * battenDeflections(model, solveContinuousBeam(model)).spans[0]!.drop
  */
 export function battenDeflections(model: BattenModel, solution: BeamSolution): DeflectionFigures {
-  const shapes = model.spans.map((span, k) => new SpanShape(span, solution.supportMoments[k]!, solution.spanStartShear[k]!, solution.spanMoments[k]!))
+  const shapes = model.spans.map(
+    (span, k) =>
+      new SpanShape(span, solution.supportMoments[k]!, solution.spanStartShear[k]!, solution.spanMoments[k]!),
+  )
   const spans = shapes.map((shape, k) => {
     const origin = model.supports[k]!
     const u = shape.largestAt()
@@ -29,11 +32,19 @@ export function battenDeflections(model: BattenModel, solution: BeamSolution): D
   const last = shapes[shapes.length - 1]
   if (first && model.startOverhang.length.gt(0)) {
     const c = model.startOverhang.length
-    overhangs.push({ end: 'start', length: c, drop: first.endSlopes().start.times(c).plus(cantileverTipDrop(model.startOverhang)) })
+    overhangs.push({
+      end: 'start',
+      length: c,
+      drop: first.endSlopes().start.times(c).plus(cantileverTipDrop(model.startOverhang)),
+    })
   }
   if (last && model.endOverhang.length.gt(0)) {
     const c = model.endOverhang.length
-    overhangs.push({ end: 'end', length: c, drop: last.endSlopes().end.times(c).neg().plus(cantileverTipDrop(model.endOverhang)) })
+    overhangs.push({
+      end: 'end',
+      length: c,
+      drop: last.endSlopes().end.times(c).neg().plus(cantileverTipDrop(model.endOverhang)),
+    })
   }
   return { spans, overhangs }
 }

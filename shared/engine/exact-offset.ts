@@ -2,7 +2,10 @@ import type { Decimal } from 'decimal.js'
 import { scaledDecimal } from './scaled-decimal.js'
 
 /** A number's own decimal (the shortest that reads back to it) as an integer and a count of places. */
-export interface NumberDigits { units: number; scale: number }
+export interface NumberDigits {
+  units: number
+  scale: number
+}
 
 // Exact powers of ten as doubles, enough for any count of places a plain-notation number shows.
 const POWERS_OF_TEN = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`))

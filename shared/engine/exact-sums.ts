@@ -59,7 +59,11 @@ export function scaledInteger(value: Decimal): { units: bigint; scale: number } 
  * @example
  * exactRunningSums([Dec(4), Dec('2.5')], [Dec(5), Dec(2)], 2)!.row(2).map(String) // ['7', '25']
  */
-export function exactRunningSums(at: readonly Decimal[], coefficient: readonly Decimal[], columns: number): SumColumns | undefined {
+export function exactRunningSums(
+  at: readonly Decimal[],
+  coefficient: readonly Decimal[],
+  columns: number,
+): SumColumns | undefined {
   const xs = scaleAll(at)
   const cs = scaleAll(coefficient)
   if (!xs || !cs) return undefined

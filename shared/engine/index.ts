@@ -5,7 +5,12 @@ export { planBricks, type BrickPlan, type BrickStock } from './brick-plan.js'
 export { travelShift, battenTravel, arborTravel } from './travel-shift.js'
 export { purchaseRatio, balanceCounterweight } from './counterweight.js'
 export { workingLoadLimit, DEFAULT_DESIGN_FACTOR } from './capacity-checks.js'
-export { analyseBatten, ALLOWABLE_BENDING_BASIS, ALLOWABLE_BENDING_FACTOR, type BattenAnalysis } from './batten-analysis.js'
+export {
+  analyseBatten,
+  ALLOWABLE_BENDING_BASIS,
+  ALLOWABLE_BENDING_FACTOR,
+  type BattenAnalysis,
+} from './batten-analysis.js'
 export { buildBattenModel, type BattenModel, type BattenLoads } from './batten-model.js'
 export { solveContinuousBeam, type BeamSolution } from './continuous-beam.js'
 export { formatFigure, formatQuantity } from './format.js'

@@ -18,10 +18,15 @@ type KindFigures = Pick<CalculationResult, 'counterweight' | 'travel' | 'haul' |
  * @example
  * kindFigures(input, { totalLoad: Dec(1208.8), lineLoads }, checks).counterweight?.ratio // 1
  */
-export function kindFigures(input: CalculationInput, loads: { totalLoad: Decimal; lineLoads: Decimal[] }, checks: Check[]): KindFigures {
+export function kindFigures(
+  input: CalculationInput,
+  loads: { totalLoad: Decimal; lineLoads: Decimal[] },
+  checks: Check[],
+): KindFigures {
   const { units } = input
   const { totalLoad } = loads
-  if (input.kind === 'counterweight-single' || input.kind === 'counterweight-double') return counterweightFigures(input, totalLoad, checks)
+  if (input.kind === 'counterweight-single' || input.kind === 'counterweight-double')
+    return counterweightFigures(input, totalLoad, checks)
   const figures: KindFigures = {}
   const travel = battenTravel(input)
   if (travel) figures.travel = { batten: r(travel) }
@@ -34,7 +39,11 @@ export function kindFigures(input: CalculationInput, loads: { totalLoad: Decimal
   } else if (input.kind === 'motorized' && input.hoist) {
     const motor = motorLoad(totalLoad, input.hoist, units)
     checks.push(...motor.checks)
-    figures.motor = { ratedCapacity: r(motor.ratedCapacity), load: r(motor.load), counterweightAssist: r(motor.counterweightAssist) }
+    figures.motor = {
+      ratedCapacity: r(motor.ratedCapacity),
+      load: r(motor.load),
+      counterweightAssist: r(motor.counterweightAssist),
+    }
   }
   return figures
 }
@@ -58,7 +67,11 @@ function counterweightFigures(input: CalculationInput, totalLoad: Decimal, check
       ratio,
       battenSide: r(totalLoad),
       required: r(figures.required),
-      bricks: (input.bricks ?? []).map((b, k) => ({ name: b.name, count: figures.plan.counts[k]!, weight: r(Dec(b.weight).times(figures.plan.counts[k]!)) })),
+      bricks: (input.bricks ?? []).map((b, k) => ({
+        name: b.name,
+        count: figures.plan.counts[k]!,
+        weight: r(Dec(b.weight).times(figures.plan.counts[k]!)),
+      })),
       loaded: r(figures.plan.loaded),
       stackUsed: r(figures.plan.stackUsed),
       arborSide: r(figures.arborSide),
@@ -70,11 +83,18 @@ function counterweightFigures(input: CalculationInput, totalLoad: Decimal, check
     result.travel = { batten: r(travel), arbor: r(arborTravel(travel, ratio)) }
     const lineWeight = input.liftLine?.weightPerLength
     if (lineWeight !== undefined) {
-      const shift = travelShift({ ratio, lines: input.batten.pickPoints.length, lineWeightPerLength: lineWeight, travel })
+      const shift = travelShift({
+        ratio,
+        lines: input.batten.pickPoints.length,
+        lineWeightPerLength: lineWeight,
+        travel,
+      })
       result.travel.shift = r(shift)
       const weight = formatQuantity(shift, 'weight', units)
       const message = `Over ${formatQuantity(travel, 'length', units)} of travel the lift lines move ${weight} (at the batten) toward the arbor side as the set flies out: balanced at the in trim, it is ${weight} arbor heavy at the out trim`
-      checks.push(check('travel-shift', input.tolerance !== undefined && shift.gt(input.tolerance) ? 'caution' : 'info', message))
+      checks.push(
+        check('travel-shift', input.tolerance !== undefined && shift.gt(input.tolerance) ? 'caution' : 'info', message),
+      )
     }
   }
   return result
@@ -83,5 +103,9 @@ function counterweightFigures(input: CalculationInput, totalLoad: Decimal, check
 function planCheck(input: CalculationInput, counts: number[], loaded: Decimal, units: UnitSystem): Check {
   const parts = (input.bricks ?? []).flatMap((b, k) => (counts[k] ? [`${counts[k]} × ${b.name}`] : []))
   const plan = parts.length ? parts.join(', ') : 'no bricks'
-  return check('brick-plan', 'info', `Load ${plan} (${formatQuantity(loaded, 'weight', units)}) on the arbor, after the batten is loaded`)
+  return check(
+    'brick-plan',
+    'info',
+    `Load ${plan} (${formatQuantity(loaded, 'weight', units)}) on the arbor, after the batten is loaded`,
+  )
 }

@@ -23,22 +23,28 @@ interface PipeInput {
 
 /** Steel defaults in each unit system, converted once. */
 const STEEL = Object.fromEntries(
-  UNIT_SYSTEMS.map((units) => [units, {
-    elasticModulus: convert(ELASTIC_MODULUS_KSI, 'stress', 'imperial', units),
-    yieldStrength: convert(YIELD_STRENGTH_KSI, 'stress', 'imperial', units),
-  }]),
+  UNIT_SYSTEMS.map((units) => [
+    units,
+    {
+      elasticModulus: convert(ELASTIC_MODULUS_KSI, 'stress', 'imperial', units),
+      yieldStrength: convert(YIELD_STRENGTH_KSI, 'stress', 'imperial', units),
+    },
+  ]),
 ) as Record<UnitSystem, { elasticModulus: Decimal; yieldStrength: Decimal }>
 
 /** Every standard pipe's properties in each unit system, worked out once (section powers and conversions are costly). */
 const STANDARD = new Map(
   PIPE_SIZES.flatMap((size) => {
     const section = pipeSection(size.outsideDiameter, size.wall)
-    return UNIT_SYSTEMS.map((units): [string, PipeProperties] => [`${size.key} ${units}`, {
-      momentOfInertia: convert(section.momentOfInertia, 'momentOfInertia', 'imperial', units),
-      sectionModulus: convert(section.sectionModulus, 'sectionModulus', 'imperial', units),
-      ...STEEL[units],
-      weightPerLength: convert(size.weightPerFoot, 'weightPerLength', 'imperial', units),
-    }])
+    return UNIT_SYSTEMS.map((units): [string, PipeProperties] => [
+      `${size.key} ${units}`,
+      {
+        momentOfInertia: convert(section.momentOfInertia, 'momentOfInertia', 'imperial', units),
+        sectionModulus: convert(section.sectionModulus, 'sectionModulus', 'imperial', units),
+        ...STEEL[units],
+        weightPerLength: convert(size.weightPerFoot, 'weightPerLength', 'imperial', units),
+      },
+    ])
   }),
 )
 

@@ -27,9 +27,27 @@ export interface PipeSection {
  * catalogue figures for the pipe as sold.
  */
 export const PIPE_SIZES: readonly PipeSize[] = [
-  { key: 'nps-1-1/4-sch40', label: '1-1/4 in pipe, Schedule 40', outsideDiameter: 1.66, wall: 0.14, weightPerFoot: 2.27 },
-  { key: 'nps-1-1/4-sch80', label: '1-1/4 in pipe, Schedule 80', outsideDiameter: 1.66, wall: 0.191, weightPerFoot: 3.0 },
-  { key: 'nps-1-1/2-sch40', label: '1-1/2 in pipe, Schedule 40', outsideDiameter: 1.9, wall: 0.145, weightPerFoot: 2.72 },
+  {
+    key: 'nps-1-1/4-sch40',
+    label: '1-1/4 in pipe, Schedule 40',
+    outsideDiameter: 1.66,
+    wall: 0.14,
+    weightPerFoot: 2.27,
+  },
+  {
+    key: 'nps-1-1/4-sch80',
+    label: '1-1/4 in pipe, Schedule 80',
+    outsideDiameter: 1.66,
+    wall: 0.191,
+    weightPerFoot: 3.0,
+  },
+  {
+    key: 'nps-1-1/2-sch40',
+    label: '1-1/2 in pipe, Schedule 40',
+    outsideDiameter: 1.9,
+    wall: 0.145,
+    weightPerFoot: 2.72,
+  },
   { key: 'nps-1-1/2-sch80', label: '1-1/2 in pipe, Schedule 80', outsideDiameter: 1.9, wall: 0.2, weightPerFoot: 3.63 },
 ]
 

@@ -7,7 +7,12 @@ import { exactRunningSums, type SumColumns } from './exact-sums.js'
  * A step in spread intensity at u within a region (u-sense): `up` where a spread starts, down
  * where it ends. `float` is u as a number, for ordering only.
  */
-export interface IntensityStep { at: Decimal; float: number; w: Decimal; up: boolean }
+export interface IntensityStep {
+  at: Decimal
+  float: number
+  w: Decimal
+  up: boolean
+}
 
 /**
  * A region's loads in order of position with running sums, so that every total, and any quantity
@@ -32,7 +37,8 @@ const ZERO = Dec(0)
  * Ascending by the float position, the exact one breaking float ties, so the order is exact.
  * Ties are mostly one shared object (a region's length), which needs no decimal comparison.
  */
-const byPosition = <T extends { at: Decimal; float: number }>(a: T, b: T) => a.float - b.float || (a.at === b.at ? 0 : a.at.comparedTo(b.at))
+const byPosition = <T extends { at: Decimal; float: number }>(a: T, b: T) =>
+  a.float - b.float || (a.at === b.at ? 0 : a.at.comparedTo(b.at))
 
 /**
  * Orders a region's loads by position and sums their powers of position, each load handled once.
@@ -44,7 +50,12 @@ const byPosition = <T extends { at: Decimal; float: number }>(a: T, b: T) => a.f
  * const { sums } = sumRegionLoads([{ u: Dec(4), weight: Dec(5), float: { u: 4, weight: 5 } }], [], Dec(0))
  * sums.pointSums.row(1)[1]!.toString() // '20' (Σ W·a after the first point: 5 × 4)
  */
-export function sumRegionLoads(points: readonly LocalPoint[], steps: readonly IntensityStep[], entering: Decimal, closeAt?: Decimal): { sums: LoadSums; leaving: Decimal } {
+export function sumRegionLoads(
+  points: readonly LocalPoint[],
+  steps: readonly IntensityStep[],
+  entering: Decimal,
+  closeAt?: Decimal,
+): { sums: LoadSums; leaving: Decimal } {
   const ordered = points.map((p) => ({ at: p.u, float: p.float.u, weight: p.weight })).sort(byPosition)
   const pointAt = ordered.map((p) => p.at)
   const weights = ordered.map((p) => p.weight)
@@ -52,11 +63,12 @@ export function sumRegionLoads(points: readonly LocalPoint[], steps: readonly In
   const stepAt: Decimal[] = []
   const rises: Decimal[] = []
   let leaving = ZERO
-  for (let i = 0; i < sorted.length; ) {
+  for (let i = 0; i < sorted.length;) {
     const { at } = sorted[i]!
     // Spreads often share an edge: one step there, one set of powers.
     let rise = ZERO
-    for (; i < sorted.length && (sorted[i]!.at === at || sorted[i]!.at.eq(at)); i++) rise = sorted[i]!.up ? rise.plus(sorted[i]!.w) : rise.minus(sorted[i]!.w)
+    for (; i < sorted.length && (sorted[i]!.at === at || sorted[i]!.at.eq(at)); i++)
+      rise = sorted[i]!.up ? rise.plus(sorted[i]!.w) : rise.minus(sorted[i]!.w)
     if (rise.isZero()) continue
     stepAt.push(at)
     rises.push(rise)
@@ -92,14 +104,22 @@ export function sumsBefore(sums: LoadSums, u: Decimal): { points: Decimal[]; ste
  * totalSums(sums).points[0]!.toString() // total point weight in the region
  */
 export function totalSums(sums: LoadSums): { points: Decimal[]; steps: Decimal[] } {
-  return { points: [...sums.pointSums.row(sums.pointSums.rows - 1)], steps: [...sums.stepSums.row(sums.stepSums.rows - 1)] }
+  return {
+    points: [...sums.pointSums.row(sums.pointSums.rows - 1)],
+    steps: [...sums.stepSums.row(sums.stepSums.rows - 1)],
+  }
 }
 
 /**
  * The running sums in decimals, for figures the exact integers cannot hold: columns rather than a
  * row per load, so the terms are all a load allocates.
  */
-function decimalSums(at: readonly Decimal[], coefficient: readonly Decimal[], count: number, terms: (c: Decimal, x: Decimal) => Decimal[]): SumColumns {
+function decimalSums(
+  at: readonly Decimal[],
+  coefficient: readonly Decimal[],
+  count: number,
+  terms: (c: Decimal, x: Decimal) => Decimal[],
+): SumColumns {
   const columns: Decimal[][] = Array.from({ length: count }, () => [ZERO])
   at.forEach((x, i) => extend(columns, x.isZero() ? [coefficient[i]!] : terms(coefficient[i]!, x)))
   return { rows: at.length + 1, row: (i) => columns.map((column) => column[i]!) }

@@ -1,13 +1,18 @@
 import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
 import type { Region } from './batten-model.js'
-import { totalSums, type LoadSums } from './region-loads.js'
+import { totalSums } from './region-loads.js'
 
 /**
  * The first four moments of a region's loads about u = 0: Σ P·uᵏ plus ∫ w·uᵏ du, k = 0..3.
  * Weight, moment and the three-moment load terms all follow from them.
  */
-export interface RegionMoments { m0: Decimal; m1: Decimal; m2: Decimal; m3: Decimal }
+export interface RegionMoments {
+  m0: Decimal
+  m1: Decimal
+  m2: Decimal
+  m3: Decimal
+}
 
 const TWO = Dec(2)
 const THREE = Dec(3)
@@ -16,7 +21,7 @@ const HALF = Dec('0.5')
 const QUARTER = Dec('0.25')
 
 /**
- * Moments of a region's loads, read from its running sums (see {@link LoadSums}). Spread integrals
+ * Moments of a region's loads, read from its running sums (see `LoadSums` in region-loads.ts). Spread integrals
  * ∫ w·uᵏ du = w·(u2ᵏ⁺¹ − u1ᵏ⁺¹)/(k + 1) are summed over the loads and divided by k + 1 once per
  * region, so the per-load work stays in short exact decimals.
  *
@@ -36,7 +41,10 @@ export function regionMoments(region: Region): RegionMoments {
 }
 
 /** Total weight and first moment (about u = 0) of a region's loads. */
-export interface RegionSums { weight: Decimal; moment: Decimal }
+export interface RegionSums {
+  weight: Decimal
+  moment: Decimal
+}
 
 /**
  * Weight of a region's loads and their moment about the region's origin (u = 0).

@@ -13,7 +13,12 @@ const TENTHS: Decimal[] = []
  * scaledDecimal(235, 2).toString() // '2.35'
  */
 export function scaledDecimal(units: number | bigint, scale: number): Decimal {
-  const whole = typeof units === 'number' ? Dec(units) : units >= -MAX_SAFE && units <= MAX_SAFE ? Dec(Number(units)) : Dec(units.toString())
+  const whole =
+    typeof units === 'number'
+      ? Dec(units)
+      : units >= -MAX_SAFE && units <= MAX_SAFE
+        ? Dec(Number(units))
+        : Dec(units.toString())
   if (scale === 0) return whole
   return whole.times((TENTHS[scale] ??= Dec(`1e-${scale}`)))
 }

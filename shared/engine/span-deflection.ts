@@ -29,7 +29,12 @@ export class SpanShape {
     const L = span.length
     const L2 = L.times(L)
     const { m0, m1, m2, m3 } = moments
-    const loads = L2.times(L).times(m0).minus(L2.times(m1).times(THREE)).plus(L.times(m2).times(THREE)).minus(m3).div(SIX)
+    const loads = L2.times(L)
+      .times(m0)
+      .minus(L2.times(m1).times(THREE))
+      .plus(L.times(m2).times(THREE))
+      .minus(m3)
+      .div(SIX)
     const atEnd = startMoment.times(L2).times(HALF).plus(startShear.times(L2).times(L).div(SIX)).minus(loads)
     this.constant = atEnd.div(L).neg()
   }
@@ -62,14 +67,18 @@ export class SpanShape {
     let high = ((bestIndex + 1) * L) / 16
     const ratio = (Math.sqrt(5) - 1) / 2
     // A new probe often lands exactly on the last one kept: reuse its value rather than evaluate again.
-    let last = { u: NaN, size: 0 }, kept = last
+    let last = { u: NaN, size: 0 },
+      kept = last
     const size = (u: number) => (u === last.u ? last.size : u === kept.u ? kept.size : Math.abs(f(u)))
     for (let i = 0; i < 32; i++) {
       const a = high - ratio * (high - low)
       const b = low + ratio * (high - low)
       const atA = size(a)
       const atB = size(b)
-      ;[last, kept] = [{ u: a, size: atA }, { u: b, size: atB }]
+      ;[last, kept] = [
+        { u: a, size: atA },
+        { u: b, size: atB },
+      ]
       if (atA >= atB) high = b
       else low = a
     }
@@ -85,7 +94,15 @@ export class SpanShape {
     const value = this.startMoment.times(u2).times(HALF).plus(this.startShear.times(u2).times(u).div(SIX))
     const { points: p, steps: s } = sumsBefore(this.span.sums, u)
     const pointSum = p[0]!.times(u).minus(p[1]!.times(THREE)).times(u).plus(p[2]!.times(THREE)).times(u).minus(p[3]!)
-    const spreadSum = s[0]!.times(u).minus(s[1]!.times(FOUR)).times(u).plus(s[2]!.times(SIX)).times(u).minus(s[3]!.times(FOUR)).times(u).plus(s[4]!)
+    const spreadSum = s[0]!
+      .times(u)
+      .minus(s[1]!.times(FOUR))
+      .times(u)
+      .plus(s[2]!.times(SIX))
+      .times(u)
+      .minus(s[3]!.times(FOUR))
+      .times(u)
+      .plus(s[4]!)
     return value.minus(pointSum.div(SIX)).minus(spreadSum.div(TWENTY_FOUR))
   }
 
@@ -101,7 +118,9 @@ export class SpanShape {
     const starts = new Float64Array(spreadLoads.length)
     const ends = new Float64Array(spreadLoads.length)
     const intensity = new Float64Array(spreadLoads.length)
-    spreadLoads.forEach((s, i) => ((starts[i] = s.float.u1), (ends[i] = s.float.u2), (intensity[i] = s.float.weightPerLength)))
+    spreadLoads.forEach(
+      (s, i) => ((starts[i] = s.float.u1), (ends[i] = s.float.u2), (intensity[i] = s.float.weightPerLength)),
+    )
     return (u) => {
       let points = 0
       for (let i = 0; i < at.length; i++) {

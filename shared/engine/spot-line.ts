@@ -9,13 +9,26 @@ import { formatQuantity } from './format.js'
  * @example
  * spotLineChecks([Dec(300)], [0], 250, 'imperial')[0]!.code // 'block-over-rating'
  */
-export function spotLineChecks(loads: readonly Decimal[], positions: readonly number[], blockRating: number | undefined, units: UnitSystem): Check[] {
+export function spotLineChecks(
+  loads: readonly Decimal[],
+  positions: readonly number[],
+  blockRating: number | undefined,
+  units: UnitSystem,
+): Check[] {
   if (blockRating === undefined)
-    return [check('block-rating-unchecked', 'info', 'No block rating was given, so the spot line blocks were not checked')]
+    return [
+      check('block-rating-unchecked', 'info', 'No block rating was given, so the spot line blocks were not checked'),
+    ]
   const checks: Check[] = []
   loads.forEach((load, k) => {
     if (load.gt(blockRating))
-      checks.push(check('block-over-rating', 'danger', `Spot line at ${formatQuantity(positions[k]!, 'length', units)} puts ${formatQuantity(load, 'weight', units)} on its block, above the block rating of ${formatQuantity(blockRating, 'weight', units)}`))
+      checks.push(
+        check(
+          'block-over-rating',
+          'danger',
+          `Spot line at ${formatQuantity(positions[k]!, 'length', units)} puts ${formatQuantity(load, 'weight', units)} on its block, above the block rating of ${formatQuantity(blockRating, 'weight', units)}`,
+        ),
+      )
   })
   return checks
 }

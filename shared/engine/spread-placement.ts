@@ -15,7 +15,13 @@ const ZERO = Dec(0)
  * const frame = battenFrame(20, [0, 10, 20])
  * placeSpread(frame, 5, 20, Dec(2), 2) // steps: +2 at u = 5 in span 0, −2 on line 2
  */
-export function placeSpread(frame: BattenFrame, from: number, to: number, w: Decimal, wFloat: number): { start: Place; end: Place } {
+export function placeSpread(
+  frame: BattenFrame,
+  from: number,
+  to: number,
+  w: Decimal,
+  wFloat: number,
+): { start: Place; end: Place } {
   const start = place(frame, from)
   const end = place(frame, to)
   if (!w.isZero()) {
@@ -30,13 +36,18 @@ export function placeSpread(frame: BattenFrame, from: number, to: number, w: Dec
       u1: u1 && 'u' in u1 ? u1.u : ZERO,
       u2: u2 && 'u' in u2 ? u2.u : region.length,
       weightPerLength: w,
-      float: { u1: u1 && 'u' in u1 ? u1.float : 0, u2: u2 && 'u' in u2 ? u2.float : region.lengthFloat, weightPerLength: wFloat },
+      float: {
+        u1: u1 && 'u' in u1 ? u1.float : 0,
+        u2: u2 && 'u' in u2 ? u2.float : region.lengthFloat,
+        weightPerLength: wFloat,
+      },
     })
   // In the start overhang u runs toward x = 0, so the far edge (to) is its u1 and from its u2.
   if (from < xs[0]!) piece(frame.start, inside(end, frame.start), start)
   if (to > xs[last]!) piece(frame.end, inside(start, frame.end), end)
   for (let k = 0; k < last; k++) {
-    if (Math.min(to, xs[k + 1]!) > Math.max(from, xs[k]!)) piece(spans[k]!, inside(start, spans[k]!), inside(end, spans[k]!))
+    if (Math.min(to, xs[k + 1]!) > Math.max(from, xs[k]!))
+      piece(spans[k]!, inside(start, spans[k]!), inside(end, spans[k]!))
   }
   return { start, end }
 }

@@ -30,7 +30,12 @@ export function bendingStress(moment: Decimal.Value, sectionModulus: Decimal.Val
  * @example
  * deflectionFromEIy(1728, 29000, 1, 'imperial').toFixed(4) // '0.1030' (1 lb·ft³ = 1,728 lb·in³; EI = 29e6 lb·in²)
  */
-export function deflectionFromEIy(eiy: Decimal.Value, elasticModulus: Decimal.Value, momentOfInertia: Decimal.Value, units: UnitSystem): Decimal {
+export function deflectionFromEIy(
+  eiy: Decimal.Value,
+  elasticModulus: Decimal.Value,
+  momentOfInertia: Decimal.Value,
+  units: UnitSystem,
+): Decimal {
   return deflectionConverter(elasticModulus, momentOfInertia, units)(eiy)
 }
 
@@ -41,7 +46,11 @@ export function deflectionFromEIy(eiy: Decimal.Value, elasticModulus: Decimal.Va
  * const toInches = deflectionConverter(29000, 1, 'imperial')
  * toInches(1728).toFixed(4) // '0.1030'
  */
-export function deflectionConverter(elasticModulus: Decimal.Value, momentOfInertia: Decimal.Value, units: UnitSystem): (eiy: Decimal.Value) => Decimal {
+export function deflectionConverter(
+  elasticModulus: Decimal.Value,
+  momentOfInertia: Decimal.Value,
+  units: UnitSystem,
+): (eiy: Decimal.Value) => Decimal {
   const { newtons, cubicMetres } = FACTORS[units]
   const stiffness = toSI(elasticModulus, 'stress', units).times(toSI(momentOfInertia, 'momentOfInertia', units))
   return (eiy) => fromSI(Dec(eiy).times(newtons).times(cubicMetres).div(stiffness), 'shortLength', units)

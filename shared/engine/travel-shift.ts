@@ -9,7 +9,12 @@ import type { Decimal } from 'decimal.js'
  * @example
  * travelShift({ ratio: 1, lines: 5, lineWeightPerLength: 0.11, travel: 50 }).toString() // '55'
  */
-export function travelShift(options: { ratio: 1 | 2; lines: number; lineWeightPerLength: Decimal.Value; travel: Decimal.Value }): Decimal {
+export function travelShift(options: {
+  ratio: 1 | 2
+  lines: number
+  lineWeightPerLength: Decimal.Value
+  travel: Decimal.Value
+}): Decimal {
   const factor = options.ratio === 2 ? Dec('1.5') : Dec(2)
   return factor.times(options.lines).times(options.lineWeightPerLength).times(options.travel)
 }

@@ -6,8 +6,7 @@ import type { Venue } from '../schemas/venue.js'
 
 /** One thing hung on a batten: at a point, or spread over a stretch (the whole batten when from/to are left out). */
 export type HangItem =
-  | { label: string; weight: number; at: number }
-  | { label: string; weightPerLength: number; from?: number; to?: number }
+  { label: string; weight: number; at: number } | { label: string; weightPerLength: number; from?: number; to?: number }
 
 const present = <T>(value: T | null | undefined): value is T => value !== null && value !== undefined
 
@@ -63,10 +62,16 @@ export function linesetCalculationInput(options: {
     }
     if (present(lineset.pipeWeight)) input.pipeWeightAboard = lineset.pipeWeight
     // Until venue-wide stock lands, every brick the house owns counts as free.
-    input.bricks = options.brickTypes.map((brick) => ({ name: brick.name, weight: brick.unitWeight, thickness: brick.thickness, available: brick.quantityOwned }))
+    input.bricks = options.brickTypes.map((brick) => ({
+      name: brick.name,
+      weight: brick.unitWeight,
+      thickness: brick.thickness,
+      available: brick.quantityOwned,
+    }))
   }
   if ((lineset.kind === 'hemp-single' || lineset.kind === 'hemp-multi') && present(lineset.sandbagWeight))
     input.sandbag = { weight: lineset.sandbagWeight }
-  if (lineset.kind === 'motorized' && present(lineset.hoistRatedCapacity)) input.hoist = { ratedCapacity: lineset.hoistRatedCapacity }
+  if (lineset.kind === 'motorized' && present(lineset.hoistRatedCapacity))
+    input.hoist = { ratedCapacity: lineset.hoistRatedCapacity }
   return input
 }

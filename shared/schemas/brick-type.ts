@@ -7,7 +7,11 @@ const brickTypeFields = z.object({
   material: requiredText(40),
   unitWeight: positive(),
   thickness: positive(),
-  quantityOwned: z.number({ error: 'Enter a number' }).int('Must be a whole number').min(0, 'Must not be negative').max(100000),
+  quantityOwned: z
+    .number({ error: 'Enter a number' })
+    .int('Must be a whole number')
+    .min(0, 'Must not be negative')
+    .max(100000),
 })
 
 export const brickTypeInputSchema = brickTypeFields

@@ -22,7 +22,13 @@ function checkBatten(input: RuleInput, ctx: Context): void {
     if (at > length) fail(ctx, path, `Pick point at ${at} is beyond the batten's length of ${length}`)
     else if (index > 0 && at <= pickPoints[index - 1]!) {
       const previous = pickPoints[index - 1]!
-      fail(ctx, path, at === previous ? `Pick point at ${at} is repeated` : `Pick points must be in order from one end: ${at} comes after ${previous}`)
+      fail(
+        ctx,
+        path,
+        at === previous
+          ? `Pick point at ${at} is repeated`
+          : `Pick points must be in order from one end: ${at} comes after ${previous}`,
+      )
     }
   })
   if (input.batten.weightPerLength === undefined && input.batten.pipeSize === undefined)
@@ -37,8 +43,14 @@ function checkItems(input: RuleInput, ctx: Context): void {
     const path = (field: string) => ['items', index, field]
     const isPoint = item.weight !== undefined || item.at !== undefined
     const isSpan = item.weightPerLength !== undefined || item.from !== undefined || item.to !== undefined
-    if (isPoint && isSpan) return fail(ctx, ['items', index], 'An item is either at a point (weight, at) or along a span (weightPerLength, from, to), not both')
-    if (!isPoint && !isSpan) return fail(ctx, ['items', index], 'An item needs a weight and a position, or a weight per length')
+    if (isPoint && isSpan)
+      return fail(
+        ctx,
+        ['items', index],
+        'An item is either at a point (weight, at) or along a span (weightPerLength, from, to), not both',
+      )
+    if (!isPoint && !isSpan)
+      return fail(ctx, ['items', index], 'An item needs a weight and a position, or a weight per length')
     if (isPoint) {
       if (item.weight === undefined) fail(ctx, path('weight'), 'Item weight is required')
       if (item.at === undefined) fail(ctx, path('at'), 'Item position is required')
@@ -59,7 +71,8 @@ function checkKind(input: RuleInput, ctx: Context): void {
     fail(ctx, ['batten', 'pickPoints'], 'A single-line hemp set has exactly one pick point')
   if (input.kind.startsWith('counterweight') && !input.arbor)
     fail(ctx, ['arbor'], 'A counterweight set needs its arbor (empty weight, capacity, stack length)')
-  if (input.kind === 'motorized' && !input.hoist) fail(ctx, ['hoist'], 'A motorized set needs its hoist (rated capacity)')
+  if (input.kind === 'motorized' && !input.hoist)
+    fail(ctx, ['hoist'], 'A motorized set needs its hoist (rated capacity)')
 }
 
 /**

@@ -34,7 +34,9 @@ const battenSchema = z.strictObject({
     .array(atLeastZero('Pick point'), { error: 'Pick points must be a list of positions' })
     .min(1, 'At least one pick point (lift line) is required')
     .max(24, 'At most 24 pick points are supported'),
-  pipeSize: z.enum(PIPE_SIZE_KEYS as [string, ...string[]], { error: `Pipe size must be one of ${PIPE_SIZE_KEYS.join(', ')}` }).optional(),
+  pipeSize: z
+    .enum(PIPE_SIZE_KEYS as [string, ...string[]], { error: `Pipe size must be one of ${PIPE_SIZE_KEYS.join(', ')}` })
+    .optional(),
   pipe: pipeSchema.optional(),
 })
 
@@ -48,7 +50,10 @@ const itemSchema = z.strictObject({
 })
 
 const brickSchema = z.strictObject({
-  name: z.string({ error: 'Brick name must be text' }).min(1, 'Brick name is required').max(80, 'Brick name is too long'),
+  name: z
+    .string({ error: 'Brick name must be text' })
+    .min(1, 'Brick name is required')
+    .max(80, 'Brick name is too long'),
   weight: aboveZero('Brick weight'),
   thickness: aboveZero('Brick thickness'),
   available: atLeastZero('Bricks available').int('Bricks available must be a whole number'),
@@ -84,7 +89,10 @@ const baseSchema = z.strictObject({
   sandbag: z.strictObject({ weight: atLeastZero('Sandbag weight') }).optional(),
   spotLine: z.strictObject({ blockRating: aboveZero('Block rating') }).optional(),
   hoist: z
-    .strictObject({ ratedCapacity: aboveZero('Hoist rated capacity'), counterweightAssist: atLeastZero('Counterweight assist').optional() })
+    .strictObject({
+      ratedCapacity: aboveZero('Hoist rated capacity'),
+      counterweightAssist: atLeastZero('Counterweight assist').optional(),
+    })
     .optional(),
   ropeLockHolding: atLeastZero('Rope lock holding').optional(),
 })

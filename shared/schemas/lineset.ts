@@ -86,14 +86,18 @@ function checkLineset(value: Partial<Record<keyof LinesetFields, unknown>>, ctx:
 }
 
 // Run the rules between fields whenever the body is an object, not only once every field is valid.
-const whenObject = { when: (payload: { value: unknown }) => typeof payload.value === 'object' && payload.value !== null }
+const whenObject = {
+  when: (payload: { value: unknown }) => typeof payload.value === 'object' && payload.value !== null,
+}
 
 /** The lineset form and the body of `POST /api/v1/linesets`, figures in the venue's units. */
 export const linesetInputSchema = linesetFields.superRefine(checkLineset, whenObject)
 export type LinesetInput = z.infer<typeof linesetInputSchema>
 
 /** The body of `PUT /api/v1/linesets/:id`: the whole lineset plus the version it was read at. */
-export const linesetUpdateSchema = linesetFields.extend({ version: versionField() }).superRefine(checkLineset, whenObject)
+export const linesetUpdateSchema = linesetFields
+  .extend({ version: versionField() })
+  .superRefine(checkLineset, whenObject)
 export type LinesetUpdate = z.infer<typeof linesetUpdateSchema>
 
 /** A lineset as the API returns it. */

@@ -2,7 +2,11 @@ import { z } from 'zod'
 import { ROLES, type Role } from './role.js'
 import { requiredText, versionField } from './quantity.js'
 
-const email = z.string({ error: 'Enter an e-mail address' }).trim().toLowerCase().pipe(z.email('Enter a valid e-mail address'))
+const email = z
+  .string({ error: 'Enter an e-mail address' })
+  .trim()
+  .toLowerCase()
+  .pipe(z.email('Enter a valid e-mail address'))
 const role = z.enum(ROLES, { error: 'Choose a role' })
 
 /** Adding someone to the venue: a new account, or an existing account given a role here. */

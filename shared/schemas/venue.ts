@@ -8,7 +8,11 @@ export const venueSettingsSchema = z.object({
   unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Choose imperial or metric' }),
   balanceTolerance: nonNegative(),
   ropeLockHolding: nonNegative(),
-  wireRopeDesignFactor: z.number({ error: 'Enter a number' }).finite().min(1, 'Must be 1 or more').max(20, 'At most 20'),
+  wireRopeDesignFactor: z
+    .number({ error: 'Enter a number' })
+    .finite()
+    .min(1, 'Must be 1 or more')
+    .max(20, 'At most 20'),
   version: versionField(),
 })
 export type VenueSettingsUpdate = z.infer<typeof venueSettingsSchema>

@@ -46,7 +46,8 @@ async function retryWithFreshToken(config: Retried) {
 api.interceptors.response.use(undefined, (thrown: unknown) => {
   const error = toApiError(thrown)
   const config = isAxiosError(thrown) ? (thrown.config as Retried | undefined) : undefined
-  if (error.status === 403 && error.code === 'csrf_failed' && config && !config.csrfRetried) return retryWithFreshToken(config)
+  if (error.status === 403 && error.code === 'csrf_failed' && config && !config.csrfRetried)
+    return retryWithFreshToken(config)
   // Only a lapsed session sends the person back to sign in; wrong credentials stay on the sign-in form.
   if (error.status === 401 && error.code === 'not_signed_in') signedOutHandler()
   return Promise.reject(error)

@@ -24,7 +24,8 @@ export function toApiError(thrown: unknown): ApiError {
     const status = thrown.response?.status ?? 0
     const data: unknown = thrown.response?.data
     if (isErrorBody(data)) return new ApiError(status, data.error.code, data.error.message, data.error.fields)
-    if (status === 0) return new ApiError(0, 'network_error', 'Cannot reach the server. Check the connection and try again.')
+    if (status === 0)
+      return new ApiError(0, 'network_error', 'Cannot reach the server. Check the connection and try again.')
     return new ApiError(status, 'unexpected_answer', `The server answered with an unexpected error (${status}).`)
   }
   return new ApiError(0, 'client_error', thrown instanceof Error ? thrown.message : 'Something went wrong.')

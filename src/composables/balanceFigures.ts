@@ -8,7 +8,8 @@ import type { Quantity, UnitSystem } from '../../shared/units/index.js'
  * @example
  * showFigure(1016.564, 'weight', 'imperial') // '1,016.56 lb'
  */
-export const showFigure = (value: number, quantity: Quantity, units: UnitSystem) => formatQuantity(value, quantity, units)
+export const showFigure = (value: number, quantity: Quantity, units: UnitSystem) =>
+  formatQuantity(value, quantity, units)
 
 /**
  * The out-of-balance figure in words. The engine states it at the batten: positive when the batten side is heavier.

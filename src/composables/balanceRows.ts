@@ -51,6 +51,8 @@ const figure = (text: string) => (text.trim() === '' ? undefined : Number(text))
  */
 export function itemFrom(row: BalanceRow): CalculationInput['items'][number] {
   const label = row.label.trim() || undefined
-  const figures = Object.fromEntries(ROW_FIGURES[row.kind].map((key) => [key, figure(row[key])]).filter(([, value]) => value !== undefined))
+  const figures = Object.fromEntries(
+    ROW_FIGURES[row.kind].map((key) => [key, figure(row[key])]).filter(([, value]) => value !== undefined),
+  )
   return { ...(label ? { label } : {}), ...figures }
 }

@@ -1,6 +1,6 @@
 import type { LinesetInput, LinesetKind, LinesetStatus } from '../../shared/schemas/index.js'
 import { isCounterweightKind, LINESET_FIGURE_QUANTITIES } from '../../shared/schemas/index.js'
-import { roundTo, type Quantity, type UnitSystem } from '../../shared/units/index.js'
+import { roundTo, type UnitSystem } from '../../shared/units/index.js'
 import type { ExactFigures } from './exactFigures'
 import { isHempKind } from './linesetLabels'
 
@@ -27,14 +27,28 @@ const asText = (value: number | null | undefined) => (value === null || value ==
 
 export function emptyDraft(): LinesetDraft {
   const figures = Object.fromEntries(FIGURE_KEYS.map((key) => [key, ''])) as Record<FigureKey, string>
-  return { ...figures, number: '', name: '', kind: 'counterweight-single', status: 'in-service', pipeSize: '', pickPoints: [''], notes: '' }
+  return {
+    ...figures,
+    number: '',
+    name: '',
+    kind: 'counterweight-single',
+    status: 'in-service',
+    pipeSize: '',
+    pickPoints: [''],
+    notes: '',
+  }
 }
 
 /** The draft for a saved lineset: figures rounded for the eye, their exact values remembered in `figures`. */
 export function draftFrom(lineset: LinesetInput, figures: ExactFigures, system: UnitSystem): LinesetDraft {
   const show = (key: FigureKey | 'pickPoints', value: number | null | undefined) =>
-    value === null || value === undefined ? '' : figures.show(value, key === 'pickPoints' ? 'length' : FIGURE_QUANTITIES[key], system)
-  const texts = Object.fromEntries(FIGURE_KEYS.map((key) => [key, show(key, lineset[key])])) as Record<FigureKey, string>
+    value === null || value === undefined
+      ? ''
+      : figures.show(value, key === 'pickPoints' ? 'length' : FIGURE_QUANTITIES[key], system)
+  const texts = Object.fromEntries(FIGURE_KEYS.map((key) => [key, show(key, lineset[key])])) as Record<
+    FigureKey,
+    string
+  >
   return {
     ...texts,
     number: asText(lineset.number),
@@ -95,7 +109,8 @@ export function spreadPickPoints(points: readonly string[], battenLength: number
   if (!(battenLength > 0) || count === 0) return [...points]
   const first = Number(points[0])
   const last = Number(points[count - 1])
-  const keepEnds = count >= 2 && points[0]?.trim() && points[count - 1]?.trim() && first >= 0 && last > first && last <= battenLength
+  const keepEnds =
+    count >= 2 && points[0]?.trim() && points[count - 1]?.trim() && first >= 0 && last > first && last <= battenLength
   if (keepEnds) {
     const step = (last - first) / (count - 1)
     return points.map((_, index) => String(roundTo(first + step * index, 2)))

@@ -10,11 +10,30 @@ export interface NavigationEntry {
 }
 
 const ENTRIES: readonly NavigationEntry[] = [
-  { title: 'Linesets', icon: 'mdi-format-list-numbered', routeName: 'linesets-list', testid: 'nav-linesets', roles: ROLES },
+  {
+    title: 'Linesets',
+    icon: 'mdi-format-list-numbered',
+    routeName: 'linesets-list',
+    testid: 'nav-linesets',
+    roles: ROLES,
+  },
   { title: 'Bricks', icon: 'mdi-cube-outline', routeName: 'brick-types-list', testid: 'nav-bricks', roles: ROLES },
-  { title: 'People', icon: 'mdi-account-group-outline', routeName: 'people-list', testid: 'nav-people', roles: PEOPLE_MANAGERS },
-  { title: 'Venue settings', icon: 'mdi-tune-variant', routeName: 'venue-settings', testid: 'nav-venue-settings', roles: INVENTORY_EDITORS },
+  {
+    title: 'People',
+    icon: 'mdi-account-group-outline',
+    routeName: 'people-list',
+    testid: 'nav-people',
+    roles: PEOPLE_MANAGERS,
+  },
+  {
+    title: 'Venue settings',
+    icon: 'mdi-tune-variant',
+    routeName: 'venue-settings',
+    testid: 'nav-venue-settings',
+    roles: INVENTORY_EDITORS,
+  },
 ]
 
 /** The drawer entries a role may open; the routes carry the same roles, so the two cannot drift far. */
-export const navigationFor = (role: Role | undefined) => (role ? ENTRIES.filter((entry) => entry.roles.includes(role)) : [])
+export const navigationFor = (role: Role | undefined) =>
+  role ? ENTRIES.filter((entry) => entry.roles.includes(role)) : []

@@ -13,7 +13,9 @@ export function useLinesetFilters(linesets: Ref<readonly Lineset[]>) {
     return linesets.value.filter((lineset) => {
       if (kinds.value.length && !kinds.value.includes(lineset.kind)) return false
       if (statuses.value.length && !statuses.value.includes(lineset.status)) return false
-      const haystack = [lineset.number, lineset.name, KIND_LABELS[lineset.kind], lineset.notes ?? ''].join(' ').toLowerCase()
+      const haystack = [lineset.number, lineset.name, KIND_LABELS[lineset.kind], lineset.notes ?? '']
+        .join(' ')
+        .toLowerCase()
       return words.every((word) => haystack.includes(word))
     })
   })

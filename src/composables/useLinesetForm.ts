@@ -89,7 +89,22 @@ export function useLinesetForm(options: Options) {
     return verdict.value.success ? verdict.value.data : null
   }
 
-  return { draft, dirty, touched, submitted, serverFields, clientFields, messageFor, edited, unit, fill, bind, bindPickPoint, submit, readonly: options.readonly }
+  return {
+    draft,
+    dirty,
+    touched,
+    submitted,
+    serverFields,
+    clientFields,
+    messageFor,
+    edited,
+    unit,
+    fill,
+    bind,
+    bindPickPoint,
+    submit,
+    readonly: options.readonly,
+  }
 }
 
 export type LinesetForm = ReturnType<typeof useLinesetForm>

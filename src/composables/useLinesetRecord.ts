@@ -29,7 +29,9 @@ export function useLinesetRecord(id: () => string | undefined) {
   /** Creates or updates; answers the saved lineset, or undefined when the server refused (see `saving.error`). */
   async function save(body: LinesetInput) {
     const current = lineset.value
-    const saved = await saving.run(() => (current ? store.update(current.id, { ...body, version: current.version }) : store.create(body)))
+    const saved = await saving.run(() =>
+      current ? store.update(current.id, { ...body, version: current.version }) : store.create(body),
+    )
     if (saved) {
       lineset.value = saved
       reads.value += 1

@@ -1,6 +1,10 @@
 import { computed, inject, provide, ref, toValue, type InjectionKey, type MaybeRefOrGetter } from 'vue'
 import type { BrickType, Lineset, Venue } from '../../shared/schemas/index.js'
-import { calculationInputSchema, type CalculationInput, type CalculationResult } from '../../shared/schemas/calculation.js'
+import {
+  calculationInputSchema,
+  type CalculationInput,
+  type CalculationResult,
+} from '../../shared/schemas/calculation.js'
 import { fieldsFromIssues } from '../../shared/errors/fields.js'
 import { runCalculation } from '../../shared/engine/calculate.js'
 import { linesetCalculationInput } from '../../shared/hang/lineset-calculation.js'
@@ -14,7 +18,10 @@ function calculateSafely(input: CalculationInput): Outcome {
     return runCalculation(input)
   } catch (thrown) {
     const message = thrown instanceof Error ? thrown.message : String(thrown)
-    return { ok: false, error: { error: { code: 'internal_error', message: `The figures could not be worked out: ${message}` } } }
+    return {
+      ok: false,
+      error: { error: { code: 'internal_error', message: `The figures could not be worked out: ${message}` } },
+    }
   }
 }
 
@@ -40,7 +47,12 @@ export function useLiveBalance(sources: Sources) {
   const input = computed<CalculationInput | null>(() => {
     const venue = toValue(sources.venue)
     if (!venue) return null
-    const base = linesetCalculationInput({ lineset: toValue(sources.lineset), venue, brickTypes: toValue(sources.brickTypes), items: [] })
+    const base = linesetCalculationInput({
+      lineset: toValue(sources.lineset),
+      venue,
+      brickTypes: toValue(sources.brickTypes),
+      items: [],
+    })
     // Rows go in as typed (figures may be missing) so the engine's messages name what each one lacks.
     return { ...base, items: counted.value.map(itemFrom) }
   })
@@ -64,7 +76,9 @@ export function useLiveBalance(sources: Sources) {
       for (const row of counted.value) {
         if (byRow[row.id]) continue
         const alone = calculationInputSchema.safeParse({ ...input.value, items: [itemFrom(row)] })
-        if (!alone.success) for (const [path, message] of Object.entries(fieldsFromIssues(alone.error.issues))) place(path, message, [row])
+        if (!alone.success)
+          for (const [path, message] of Object.entries(fieldsFromIssues(alone.error.issues)))
+            place(path, message, [row])
       }
     return byRow
   })
@@ -81,8 +95,13 @@ export function useLiveBalance(sources: Sources) {
 
   const add = (kind: BalanceRow['kind'] = 'point') => rows.value.push(emptyRow(kind))
   const remove = (id: number) => (rows.value = rows.value.filter((row) => row.id !== id))
+  /** Rows change only here, so the list that owns them is the one place they are written. */
+  const update = (id: number, patch: Partial<Omit<BalanceRow, 'id'>>) => {
+    const row = rows.value.find((candidate) => candidate.id === id)
+    if (row) Object.assign(row, patch)
+  }
 
-  return { rows, input, outcome, result, rowMessages, otherProblems, add, remove }
+  return { rows, input, outcome, result, rowMessages, otherProblems, add, remove, update }
 }
 
 export type LiveBalance = ReturnType<typeof useLiveBalance>

@@ -52,4 +52,5 @@ export function useSchemaForm<Schema extends z.ZodType, Draft extends Record<str
 
 /** Blank text is "not entered" (so the schema asks for it); anything else is read as a number. */
 export const numberFrom = (text: unknown) => (String(text ?? '').trim() === '' ? undefined : Number(text))
-export const textFrom = (value: number | null | undefined) => (value === null || value === undefined ? '' : String(value))
+export const textFrom = (value: number | null | undefined) =>
+  value === null || value === undefined ? '' : String(value)

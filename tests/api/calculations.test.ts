@@ -31,14 +31,22 @@ describe('POST /api/v1/calculations', () => {
   it('when the input is valid, then it answers what the shared engine computes, line loads included', async () => {
     const res = await flyOperator.post('/api/v1/calculations', twoSpans)
     expect(res.status).toBe(200)
-    expect(res.body.lineLoads).toEqual([{ at: 0, load: 75 }, { at: 20, load: 250 }, { at: 40, load: 75 }])
+    expect(res.body.lineLoads).toEqual([
+      { at: 0, load: 75 },
+      { at: 20, load: 250 },
+      { at: 40, load: 75 },
+    ])
     expect(res.body.counterweight.ratio).toBe(1)
     const local = runCalculation(twoSpans)
     expect(local.ok && res.body).toEqual(local.ok ? JSON.parse(JSON.stringify(local.result)) : null)
   })
 
   it('when the input is invalid, then it answers 400 with the error shape naming the fields', async () => {
-    const res = await flyOperator.post('/api/v1/calculations', { ...twoSpans, units: 'furlongs', batten: { ...twoSpans.batten, pickPoints: [0, 50] } })
+    const res = await flyOperator.post('/api/v1/calculations', {
+      ...twoSpans,
+      units: 'furlongs',
+      batten: { ...twoSpans.batten, pickPoints: [0, 50] },
+    })
     expect(res.status).toBe(400)
     expect(res.body.error.code).toBe('validation_failed')
     expect(Object.keys(res.body.error.fields)).toEqual(expect.arrayContaining(['units']))

@@ -15,7 +15,12 @@ afterAll(() => app.stop())
 
 describe('people and roles', () => {
   it('when an administrator adds a person, then that person can sign in with the role given', async () => {
-    const res = await admin.post('/api/v1/people', { email: 'New.Rigger@Alpha.test', name: 'New Rigger', role: 'fly-operator', password: 'a-long-password' })
+    const res = await admin.post('/api/v1/people', {
+      email: 'New.Rigger@Alpha.test',
+      name: 'New Rigger',
+      role: 'fly-operator',
+      password: 'a-long-password',
+    })
     expect(res.status).toBe(201)
     expect(res.body).toMatchObject({ email: 'new.rigger@alpha.test', role: 'fly-operator', version: 0 })
     const signIn = await new Client(app.url).signIn('new.rigger@alpha.test', 'a-long-password')
@@ -25,14 +30,19 @@ describe('people and roles', () => {
   it("when a role changes, then the member's next request already carries the new role", async () => {
     const member = await signedIn(app.url, venue.emails['stage-manager'])
     await member.get('/api/v1/people').expect(403)
-    const person = (await admin.get('/api/v1/people')).body.find((p: { email: string }) => p.email === venue.emails['stage-manager'])
+    const person = (await admin.get('/api/v1/people')).body.find(
+      (p: { email: string }) => p.email === venue.emails['stage-manager'],
+    )
     await admin.put(`/api/v1/people/${person.id}`, { role: 'administrator', version: person.version }).expect(200)
     await member.get('/api/v1/people').expect(200)
     await admin.put(`/api/v1/people/${person.id}`, { role: 'stage-manager', version: person.version + 1 }).expect(200)
   })
 
   it('when the last administrator would lose the role or an administrator removes themself, then it answers 409', async () => {
-    const res = await admin.put(`/api/v1/people/${venue.membershipIds.administrator}`, { role: 'fly-operator', version: 0 })
+    const res = await admin.put(`/api/v1/people/${venue.membershipIds.administrator}`, {
+      role: 'fly-operator',
+      version: 0,
+    })
     expect(res.status).toBe(409)
     expect(res.body.error.code).toBe('last_administrator')
     const self = await admin.delete(`/api/v1/people/${venue.membershipIds.administrator}`)
@@ -40,13 +50,24 @@ describe('people and roles', () => {
   })
 
   it('when a new account has no password, then it answers 400 naming the password field', async () => {
-    const res = await admin.post('/api/v1/people', { email: 'nopass@alpha.test', name: 'No Pass', role: 'stage-manager' })
+    const res = await admin.post('/api/v1/people', {
+      email: 'nopass@alpha.test',
+      name: 'No Pass',
+      role: 'stage-manager',
+    })
     expect(res.status).toBe(400)
     expect(res.body.error.fields).toEqual({ password: 'Enter a password for the new account' })
   })
 
   it('when a member is removed, then their session no longer reaches the API', async () => {
-    const added = (await admin.post('/api/v1/people', { email: 'temp@alpha.test', name: 'Temp', role: 'stage-manager', password: 'a-long-password' })).body
+    const added = (
+      await admin.post('/api/v1/people', {
+        email: 'temp@alpha.test',
+        name: 'Temp',
+        role: 'stage-manager',
+        password: 'a-long-password',
+      })
+    ).body
     const tempClient = await signedIn(app.url, 'temp@alpha.test', 'a-long-password')
     await tempClient.get('/api/v1/linesets').expect(200)
     await admin.delete(`/api/v1/people/${added.id}`).expect(204)
@@ -56,9 +77,20 @@ describe('people and roles', () => {
 
 describe('two administrators at once', () => {
   it('when two administrators demote each other at the same moment, then one change wins and the venue keeps an administrator', async () => {
-    const second = (await admin.post('/api/v1/people', { email: 'second.admin@alpha.test', name: 'Second Admin', role: 'administrator', password: 'a-long-password' }).expect(201)).body
+    const second = (
+      await admin
+        .post('/api/v1/people', {
+          email: 'second.admin@alpha.test',
+          name: 'Second Admin',
+          role: 'administrator',
+          password: 'a-long-password',
+        })
+        .expect(201)
+    ).body
     const other = await signedIn(app.url, 'second.admin@alpha.test', 'a-long-password')
-    const first = (await admin.get('/api/v1/people')).body.find((p: { id: string }) => p.id === venue.membershipIds.administrator)
+    const first = (await admin.get('/api/v1/people')).body.find(
+      (p: { id: string }) => p.id === venue.membershipIds.administrator,
+    )
     const [a, b] = await Promise.all([
       admin.put(`/api/v1/people/${second.id}`, { role: 'stage-manager', version: second.version }),
       other.put(`/api/v1/people/${first.id}`, { role: 'stage-manager', version: first.version }),
@@ -68,7 +100,9 @@ describe('two administrators at once', () => {
     const statuses = [a.status, b.status].sort()
     expect(statuses[0]).toBe(200)
     expect([403, 409]).toContain(statuses[1])
-    const administrators = (await app.handle.db.models.Membership.count({ where: { venueId: venue.venueId, role: 'administrator' } }))
+    const administrators = await app.handle.db.models.Membership.count({
+      where: { venueId: venue.venueId, role: 'administrator' },
+    })
     expect(administrators).toBe(1)
   })
 })

@@ -13,28 +13,104 @@ interface RouteCase {
   expected: Record<Role, number>
 }
 
-const all = (status: number): Record<Role, number> => ({ administrator: status, 'technical-director': status, 'fly-operator': status, 'stage-manager': status })
-const editors = (ok: number): Record<Role, number> => ({ administrator: ok, 'technical-director': ok, 'fly-operator': 403, 'stage-manager': 403 })
-const adminOnly = (ok: number): Record<Role, number> => ({ administrator: ok, 'technical-director': 403, 'fly-operator': 403, 'stage-manager': 403 })
-const numberFor: Record<Role, number> = { administrator: 101, 'technical-director': 102, 'fly-operator': 103, 'stage-manager': 104 }
+const all = (status: number): Record<Role, number> => ({
+  administrator: status,
+  'technical-director': status,
+  'fly-operator': status,
+  'stage-manager': status,
+})
+const editors = (ok: number): Record<Role, number> => ({
+  administrator: ok,
+  'technical-director': ok,
+  'fly-operator': 403,
+  'stage-manager': 403,
+})
+const adminOnly = (ok: number): Record<Role, number> => ({
+  administrator: ok,
+  'technical-director': 403,
+  'fly-operator': 403,
+  'stage-manager': 403,
+})
+const numberFor: Record<Role, number> = {
+  administrator: 101,
+  'technical-director': 102,
+  'fly-operator': 103,
+  'stage-manager': 104,
+}
 
-const calculation = { units: 'imperial', kind: 'counterweight-single', batten: { length: 40, weightPerLength: 2.72, pickPoints: [0, 20, 40] }, items: [], arbor: { emptyWeight: 90, capacity: 2000, stackLength: 60 }, bricks: [{ name: 'full', weight: 20, thickness: 2, available: 80 }], liftLine: { weightPerLength: 0.11, breakingStrength: 7000, designFactor: 8 }, tolerance: 10 }
+const calculation = {
+  units: 'imperial',
+  kind: 'counterweight-single',
+  batten: { length: 40, weightPerLength: 2.72, pickPoints: [0, 20, 40] },
+  items: [],
+  arbor: { emptyWeight: 90, capacity: 2000, stackLength: 60 },
+  bricks: [{ name: 'full', weight: 20, thickness: 2, available: 80 }],
+  liftLine: { weightPerLength: 0.11, breakingStrength: 7000, designFactor: 8 },
+  tolerance: 10,
+}
 
 const ROUTES: RouteCase[] = [
   { method: 'get', path: () => '/api/v1/venue', expected: all(200) },
-  { method: 'put', path: () => '/api/v1/venue', body: () => ({ name: 'Renamed', unitSystem: 'imperial', balanceTolerance: 10, ropeLockHolding: 50, wireRopeDesignFactor: 8, version: 999 }), expected: editors(409) },
+  {
+    method: 'put',
+    path: () => '/api/v1/venue',
+    body: () => ({
+      name: 'Renamed',
+      unitSystem: 'imperial',
+      balanceTolerance: 10,
+      ropeLockHolding: 50,
+      wireRopeDesignFactor: 8,
+      version: 999,
+    }),
+    expected: editors(409),
+  },
   { method: 'get', path: () => '/api/v1/linesets', expected: all(200) },
   { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}`, expected: all(200) },
-  { method: 'post', path: () => '/api/v1/linesets', body: (_f, role) => sampleLineset(numberFor[role]), expected: editors(201) },
-  { method: 'put', path: (f) => `/api/v1/linesets/${f.linesetId}`, body: () => ({ ...sampleLineset(1), version: 999 }), expected: editors(409) },
+  {
+    method: 'post',
+    path: () => '/api/v1/linesets',
+    body: (_f, role) => sampleLineset(numberFor[role]),
+    expected: editors(201),
+  },
+  {
+    method: 'put',
+    path: (f) => `/api/v1/linesets/${f.linesetId}`,
+    body: () => ({ ...sampleLineset(1), version: 999 }),
+    expected: editors(409),
+  },
   { method: 'delete', path: () => '/api/v1/linesets/00000000-0000-4000-8000-000000000000', expected: adminOnly(404) },
   { method: 'get', path: () => '/api/v1/brick-types', expected: all(200) },
-  { method: 'post', path: () => '/api/v1/brick-types', body: (_f, role) => ({ name: `Brick ${role}`, material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5 }), expected: editors(201) },
-  { method: 'put', path: (f) => `/api/v1/brick-types/${f.brickTypeId}`, body: () => ({ name: 'Full', material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5, version: 999 }), expected: editors(409) },
+  {
+    method: 'post',
+    path: () => '/api/v1/brick-types',
+    body: (_f, role) => ({ name: `Brick ${role}`, material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5 }),
+    expected: editors(201),
+  },
+  {
+    method: 'put',
+    path: (f) => `/api/v1/brick-types/${f.brickTypeId}`,
+    body: () => ({ name: 'Full', material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5, version: 999 }),
+    expected: editors(409),
+  },
   { method: 'delete', path: () => '/api/v1/brick-types/00000000-0000-4000-8000-000000000000', expected: editors(404) },
   { method: 'get', path: () => '/api/v1/people', expected: adminOnly(200) },
-  { method: 'post', path: () => '/api/v1/people', body: (_f, role) => ({ email: `new-${role}@alpha.test`, name: 'New person', role: 'stage-manager', password: 'a-long-password' }), expected: adminOnly(201) },
-  { method: 'put', path: (f) => `/api/v1/people/${f.membershipIds['stage-manager']}`, body: () => ({ role: 'stage-manager', version: 999 }), expected: adminOnly(409) },
+  {
+    method: 'post',
+    path: () => '/api/v1/people',
+    body: (_f, role) => ({
+      email: `new-${role}@alpha.test`,
+      name: 'New person',
+      role: 'stage-manager',
+      password: 'a-long-password',
+    }),
+    expected: adminOnly(201),
+  },
+  {
+    method: 'put',
+    path: (f) => `/api/v1/people/${f.membershipIds['stage-manager']}`,
+    body: () => ({ role: 'stage-manager', version: 999 }),
+    expected: adminOnly(409),
+  },
   { method: 'delete', path: () => '/api/v1/people/00000000-0000-4000-8000-000000000000', expected: adminOnly(404) },
   { method: 'post', path: () => '/api/v1/calculations', body: () => calculation, expected: all(200) },
 ]
@@ -57,7 +133,11 @@ const send = (client: Client, route: RouteCase, role: Role | null) => {
 }
 
 // Placeholders so the test names read `/api/v1/linesets/:id`.
-const named = { linesetId: ':id', brickTypeId: ':id', membershipIds: { 'stage-manager': ':id' } } as unknown as VenueFixture
+const named = {
+  linesetId: ':id',
+  brickTypeId: ':id',
+  membershipIds: { 'stage-manager': ':id' },
+} as unknown as VenueFixture
 
 describe('role x route matrix', () => {
   for (const route of ROUTES) {

@@ -28,7 +28,13 @@ describe('POST /api/v1/session', () => {
     const before = sessionCookie(await client.refreshToken())
     const res = await client.signIn(venue.emails['fly-operator'])
     expect(res.status).toBe(200)
-    expect(res.body.user).toEqual({ id: expect.any(String), email: 'fly-operator@alpha.test', name: 'fly-operator of alpha', role: 'fly-operator', venueId: venue.venueId })
+    expect(res.body.user).toEqual({
+      id: expect.any(String),
+      email: 'fly-operator@alpha.test',
+      name: 'fly-operator of alpha',
+      role: 'fly-operator',
+      venueId: venue.venueId,
+    })
     const after = sessionCookie(res)
     expect(after).toBeDefined()
     expect(after!.split(';')[0]).not.toBe(before!.split(';')[0])

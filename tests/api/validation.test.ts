@@ -22,17 +22,30 @@ const snapshot = async () => ({
 describe('validation errors change nothing', () => {
   it('when a new lineset has bad figures, then it answers 400 naming each field and stores nothing', async () => {
     const before = await snapshot()
-    const res = await td.post('/api/v1/linesets', { ...sampleLineset(7), battenLength: -4, pickPoints: [0, 20, 10], kind: 'flying-carpet', name: '' })
+    const res = await td.post('/api/v1/linesets', {
+      ...sampleLineset(7),
+      battenLength: -4,
+      pickPoints: [0, 20, 10],
+      kind: 'flying-carpet',
+      name: '',
+    })
     expect(res.status).toBe(400)
     expect(res.body.error.code).toBe('validation_failed')
-    expect(res.body.error.fields).toMatchObject({ battenLength: 'Must be more than zero', kind: 'Choose a kind of lineset', name: 'Must not be empty' })
+    expect(res.body.error.fields).toMatchObject({
+      battenLength: 'Must be more than zero',
+      kind: 'Choose a kind of lineset',
+      name: 'Must not be empty',
+    })
     expect(await snapshot()).toEqual(before)
   })
 
   it('when a lift line lies beyond the batten or out of order, then the message names that position', async () => {
     const res = await td.post('/api/v1/linesets', sampleLineset(8, { pickPoints: [0, 30, 20, 45] }))
     expect(res.status).toBe(400)
-    expect(res.body.error.fields).toEqual({ 'pickPoints.2': 'List positions in order, each once', 'pickPoints.3': 'Lies beyond the end of the batten' })
+    expect(res.body.error.fields).toEqual({
+      'pickPoints.2': 'List positions in order, each once',
+      'pickPoints.3': 'Lies beyond the end of the batten',
+    })
   })
 
   it('when a counterweight set has no arbor figures, then both are named', async () => {
@@ -50,22 +63,39 @@ describe('validation errors change nothing', () => {
   })
 
   it('when the body is not JSON, then it answers 400 with the error shape', async () => {
-    const res = await td.agent.post('/api/v1/linesets').set('X-CSRF-Token', td.csrfToken).set('content-type', 'application/json').send('{"number": 1,')
+    const res = await td.agent
+      .post('/api/v1/linesets')
+      .set('X-CSRF-Token', td.csrfToken)
+      .set('content-type', 'application/json')
+      .send('{"number": 1,')
     expect(res.status).toBe(400)
     expect(res.body.error.code).toBe('malformed_json')
   })
 
   it('when the body is in a charset the server does not read, then it answers 415 in the error shape, not 500', async () => {
-    const res = await td.agent.post('/api/v1/linesets').set('X-CSRF-Token', td.csrfToken).set('content-type', 'application/json; charset=iso-8859-1').send('{}')
+    const res = await td.agent
+      .post('/api/v1/linesets')
+      .set('X-CSRF-Token', td.csrfToken)
+      .set('content-type', 'application/json; charset=iso-8859-1')
+      .send('{}')
     expect(res.status, JSON.stringify(res.body)).toBe(415)
     expect(res.body.error.code).toBe('unreadable_request')
   })
 
   it('when a brick type has a fractional count, then it answers 400 and stores nothing', async () => {
     const before = await snapshot()
-    const res = await td.post('/api/v1/brick-types', { name: 'Odd', material: 'Steel', unitWeight: 0, thickness: 2, quantityOwned: 2.5 })
+    const res = await td.post('/api/v1/brick-types', {
+      name: 'Odd',
+      material: 'Steel',
+      unitWeight: 0,
+      thickness: 2,
+      quantityOwned: 2.5,
+    })
     expect(res.status).toBe(400)
-    expect(res.body.error.fields).toEqual({ unitWeight: 'Must be more than zero', quantityOwned: 'Must be a whole number' })
+    expect(res.body.error.fields).toEqual({
+      unitWeight: 'Must be more than zero',
+      quantityOwned: 'Must be a whole number',
+    })
     expect(await snapshot()).toEqual(before)
   })
 })
@@ -73,10 +103,16 @@ describe('validation errors change nothing', () => {
 describe('stale updates are refused', () => {
   it('when two people edit the same lineset, then the second save answers 409 and the first one stands', async () => {
     const current = (await td.get(`/api/v1/linesets/${venue.linesetId}`).expect(200)).body
-    const first = await td.put(`/api/v1/linesets/${venue.linesetId}`, { ...sampleLineset(1, { name: 'First edit' }), version: current.version })
+    const first = await td.put(`/api/v1/linesets/${venue.linesetId}`, {
+      ...sampleLineset(1, { name: 'First edit' }),
+      version: current.version,
+    })
     expect(first.status).toBe(200)
     expect(first.body.version).toBe(current.version + 1)
-    const second = await td.put(`/api/v1/linesets/${venue.linesetId}`, { ...sampleLineset(1, { name: 'Second edit' }), version: current.version })
+    const second = await td.put(`/api/v1/linesets/${venue.linesetId}`, {
+      ...sampleLineset(1, { name: 'Second edit' }),
+      version: current.version,
+    })
     expect(second.status).toBe(409)
     expect(second.body.error.code).toBe('stale_version')
     expect((await td.get(`/api/v1/linesets/${venue.linesetId}`)).body.name).toBe('First edit')
@@ -91,9 +127,17 @@ describe('stale updates are refused', () => {
 
 describe('every problem is named at once', () => {
   it('when one figure is unreadable and a lift line lies beyond the batten, then both fields are named', async () => {
-    const res = await td.post('/api/v1/linesets', { ...sampleLineset(10), travel: 'abc', battenLength: 48, pickPoints: [4, 14, 60] })
+    const res = await td.post('/api/v1/linesets', {
+      ...sampleLineset(10),
+      travel: 'abc',
+      battenLength: 48,
+      pickPoints: [4, 14, 60],
+    })
     expect(res.status).toBe(400)
-    expect(res.body.error.fields).toEqual({ travel: 'Enter a number', 'pickPoints.2': 'Lies beyond the end of the batten' })
+    expect(res.body.error.fields).toEqual({
+      travel: 'Enter a number',
+      'pickPoints.2': 'Lies beyond the end of the batten',
+    })
   })
 })
 
@@ -103,10 +147,11 @@ describe('an edit typed in units the venue has since left', () => {
     const lineset = (await td.get(`/api/v1/linesets/${venue.linesetId}`).expect(200)).body
     const brick = (await td.get('/api/v1/brick-types').expect(200)).body[0]
     const settings = (await admin.get('/api/v1/venue').expect(200)).body
-    await admin.put('/api/v1/venue', { ...settings, unitSystem: 'metric', balanceTolerance: 5, ropeLockHolding: 23 }).expect(200)
+    await admin
+      .put('/api/v1/venue', { ...settings, unitSystem: 'metric', balanceTolerance: 5, ropeLockHolding: 23 })
+      .expect(200)
 
-    const { id, updatedAt, ...body } = lineset
-    void id, void updatedAt
+    const { id: _id, updatedAt: _updatedAt, ...body } = lineset
     const staleLineset = await td.put(`/api/v1/linesets/${venue.linesetId}`, { ...body, battenLength: 40 })
     expect(staleLineset.status).toBe(409)
     const { id: brickId, ...brickBody } = brick
@@ -115,6 +160,8 @@ describe('an edit typed in units the venue has since left', () => {
     const metric = (await td.get(`/api/v1/linesets/${venue.linesetId}`).expect(200)).body
     expect(metric.battenLength).toBe(Number((lineset.battenLength * 0.3048).toFixed(6))) // ft -> m, NIST SP 811
     const back = (await admin.get('/api/v1/venue').expect(200)).body
-    await admin.put('/api/v1/venue', { ...back, unitSystem: 'imperial', balanceTolerance: 10, ropeLockHolding: 50 }).expect(200)
+    await admin
+      .put('/api/v1/venue', { ...back, unitSystem: 'imperial', balanceTolerance: 10, ropeLockHolding: 50 })
+      .expect(200)
   })
 })

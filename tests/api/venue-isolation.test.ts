@@ -30,7 +30,14 @@ describe('venue isolation', () => {
       alphaAdmin.get(`/api/v1/linesets/${beta.linesetId}`),
       alphaAdmin.put(`/api/v1/linesets/${beta.linesetId}`, { ...sampleLineset(1, { name: 'Hijacked' }), version: 0 }),
       alphaAdmin.delete(`/api/v1/linesets/${beta.linesetId}`),
-      alphaAdmin.put(`/api/v1/brick-types/${beta.brickTypeId}`, { name: 'Hijacked', material: 'Steel', unitWeight: 1, thickness: 1, quantityOwned: 0, version: 0 }),
+      alphaAdmin.put(`/api/v1/brick-types/${beta.brickTypeId}`, {
+        name: 'Hijacked',
+        material: 'Steel',
+        unitWeight: 1,
+        thickness: 1,
+        quantityOwned: 0,
+        version: 0,
+      }),
       alphaAdmin.delete(`/api/v1/brick-types/${beta.brickTypeId}`),
       alphaAdmin.put(`/api/v1/people/${beta.membershipIds['stage-manager']}`, { role: 'administrator', version: 0 }),
       alphaAdmin.delete(`/api/v1/people/${beta.membershipIds['stage-manager']}`),
@@ -45,7 +52,9 @@ describe('venue isolation', () => {
     const bricks = await betaAdmin.get('/api/v1/brick-types').expect(200)
     expect(bricks.body).toMatchObject([{ name: 'Full', version: 0 }])
     const people = await betaAdmin.get('/api/v1/people').expect(200)
-    expect(people.body.find((p: { id: string }) => p.id === beta.membershipIds['stage-manager']).role).toBe('stage-manager')
+    expect(people.body.find((p: { id: string }) => p.id === beta.membershipIds['stage-manager']).role).toBe(
+      'stage-manager',
+    )
   })
 
   it('when an id is not a UUID, then it is a 404, not a 500', async () => {

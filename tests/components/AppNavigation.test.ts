@@ -34,6 +34,11 @@ describe('AppNavigation', () => {
   })
 
   it('when an administrator is signed in, then every page is offered', async () => {
-    expect(await navigationFor('administrator')).toEqual(['nav-linesets', 'nav-bricks', 'nav-people', 'nav-venue-settings'])
+    expect(await navigationFor('administrator')).toEqual([
+      'nav-linesets',
+      'nav-bricks',
+      'nav-people',
+      'nav-venue-settings',
+    ])
   })
 })

@@ -14,7 +14,15 @@ vi.mock('../../src/api/brick-types', () => ({
   brickTypesApi: { list: vi.fn(), create: vi.fn(), update: vi.fn(), remove: vi.fn() },
 }))
 
-const steel: BrickType = { id: 'a1', name: 'Full steel', material: 'Steel', unitWeight: 19.5, thickness: 2, quantityOwned: 1400, version: 2 }
+const steel: BrickType = {
+  id: 'a1',
+  name: 'Full steel',
+  material: 'Steel',
+  unitWeight: 19.5,
+  thickness: 2,
+  quantityOwned: 1400,
+  version: 2,
+}
 
 let wrapper: VueWrapper | undefined
 beforeEach(() => vi.mocked(brickTypesApi.list).mockResolvedValue([steel]))
@@ -54,7 +62,14 @@ describe('BrickTypesListView', () => {
     quantity!.dispatchEvent(new Event('input'))
     document.querySelector<HTMLButtonElement>('[data-testid="brick-type-save"]')?.click()
     await flushPromises()
-    expect(brickTypesApi.update).toHaveBeenCalledWith('a1', { name: 'Full steel', material: 'Steel', unitWeight: 19.5, thickness: 2, quantityOwned: 1380, version: 2 })
+    expect(brickTypesApi.update).toHaveBeenCalledWith('a1', {
+      name: 'Full steel',
+      material: 'Steel',
+      unitWeight: 19.5,
+      thickness: 2,
+      quantityOwned: 1380,
+      version: 2,
+    })
   })
 
   it('when someone else changed the brick type first, then the page says so and reads the list again', async () => {

@@ -22,8 +22,25 @@ const BRICKS: BrickType[] = [
 ]
 // A 40 ft batten of 2.72 lb/ft pipe on two lines set symmetrically: the pipe alone weighs 108.8 lb.
 const TWO_LINES = lineset({ pickPoints: [10, 30] })
-const HEMP = lineset({ kind: 'hemp-multi', battenLength: 48, pickPoints: [4, 24, 44], sandbagWeight: 60, arborEmptyWeight: null, arborCapacity: null, pipeWeight: null, ratedLoad: 250 })
-const HOIST = lineset({ kind: 'motorized', pickPoints: [2, 14, 26, 38], arborEmptyWeight: null, arborCapacity: null, pipeWeight: null, ratedLoad: null, hoistRatedCapacity: 2000 })
+const HEMP = lineset({
+  kind: 'hemp-multi',
+  battenLength: 48,
+  pickPoints: [4, 24, 44],
+  sandbagWeight: 60,
+  arborEmptyWeight: null,
+  arborCapacity: null,
+  pipeWeight: null,
+  ratedLoad: 250,
+})
+const HOIST = lineset({
+  kind: 'motorized',
+  pickPoints: [2, 14, 26, 38],
+  arborEmptyWeight: null,
+  arborCapacity: null,
+  pipeWeight: null,
+  ratedLoad: null,
+  hoistRatedCapacity: 2000,
+})
 
 let wrapper: VueWrapper | undefined
 beforeEach(() => {
@@ -48,7 +65,8 @@ const type = async (w: VueWrapper, field: string, value: string) => {
   await w.get(`[data-testid="balance-row-0-${field}"] input`).setValue(value)
   await flushPromises()
 }
-const lineLoads = (w: VueWrapper) => w.findAll('[data-testid$="-load"][data-testid^="balance-line-"]').map((cell) => cell.text())
+const lineLoads = (w: VueWrapper) =>
+  w.findAll('[data-testid$="-load"][data-testid^="balance-line-"]').map((cell) => cell.text())
 /** What the engine itself answers for the same lineset, venue, bricks and items. */
 const engine = (set: Lineset, items: HangItem[]) => {
   const outcome = runCalculation(linesetCalculationInput({ lineset: set, venue, brickTypes: BRICKS, items }))
@@ -91,7 +109,9 @@ describe('LinesetBalancePanel', () => {
     await type(w, 'at', '20')
     expect(w.find('[data-testid="balance-line-loads"]').exists()).toBe(true)
     await type(w, 'at', '45')
-    expect(w.get('[data-testid="balance-row-0-messages"]').text()).toBe("At: Item at 45 is beyond the batten's length of 40")
+    expect(w.get('[data-testid="balance-row-0-messages"]').text()).toBe(
+      "At: Item at 45 is beyond the batten's length of 40",
+    )
     expect(w.get('[data-testid="balance-row-0-at"]').classes()).toContain('v-input--error')
     for (const figures of ['balance-line-loads', 'balance-counterweight', 'balance-checks', 'balance-totals'])
       expect(w.find(`[data-testid="${figures}"]`).exists(), figures).toBe(false)
@@ -108,7 +128,9 @@ describe('LinesetBalancePanel', () => {
     await w.get('[data-testid="balance-row-1-to"] input').setValue('60')
     await flushPromises()
     expect(w.get('[data-testid="balance-row-0-messages"]').text()).toBe('Weight: Item weight must be a finite number')
-    expect(w.get('[data-testid="balance-row-1-messages"]').text()).toBe("To: Span end at 60 is beyond the batten's length of 40")
+    expect(w.get('[data-testid="balance-row-1-messages"]').text()).toBe(
+      "To: Span end at 60 is beyond the batten's length of 40",
+    )
     expect(w.find('[data-testid="balance-line-loads"]').exists()).toBe(false)
   })
 

@@ -82,12 +82,16 @@ describe('LinesetEditView', () => {
     await w.get('[data-testid="lineset-reload"]').trigger('click')
     await flushPromises()
     expect(w.find('[data-testid="lineset-stale"]').exists()).toBe(false)
-    expect((w.get('[data-testid="lineset-field-name"] input').element as HTMLInputElement).value).toBe('Main drape (rehung)')
+    expect((w.get('[data-testid="lineset-field-name"] input').element as HTMLInputElement).value).toBe(
+      'Main drape (rehung)',
+    )
   })
 
   it('when the server refuses a field, then its message shows under that field', async () => {
     vi.mocked(linesetsApi.update).mockRejectedValue(
-      new ApiError(400, 'validation_failed', 'Check this field: pickPoints.3', { 'pickPoints.3': 'Too near the batten end' }),
+      new ApiError(400, 'validation_failed', 'Check this field: pickPoints.3', {
+        'pickPoints.3': 'Too near the batten end',
+      }),
     )
     const w = await openLineset('technical-director')
     await save(w)

@@ -6,7 +6,12 @@ import { lineset } from './fixtures'
 import { mountWithApp } from './mount'
 
 /** A complete single-purchase set in imperial figures: the shared made-up fixture with hand-entered pipe figures. */
-const { id: _id, version: _version, updatedAt: _updatedAt, ...counterweightSet } = lineset({
+const {
+  id: _id,
+  version: _version,
+  updatedAt: _updatedAt,
+  ...counterweightSet
+} = lineset({
   pipeSize: 'custom',
   pipeMomentOfInertia: 0.31,
   pipeSectionModulus: 0.326,
@@ -55,7 +60,13 @@ describe('LinesetForm', () => {
     expect(w.find('[data-testid="lineset-section-hoist"]').exists()).toBe(false)
     await submit(w)
     const [body] = w.emitted<[LinesetInput]>('submit')?.[0] ?? []
-    expect(body).toMatchObject({ kind: 'hemp-multi', sandbagWeight: 20, arborEmptyWeight: null, arborCapacity: null, pipeWeight: null })
+    expect(body).toMatchObject({
+      kind: 'hemp-multi',
+      sandbagWeight: 20,
+      arborEmptyWeight: null,
+      arborCapacity: null,
+      pipeWeight: null,
+    })
   })
 
   it('when every field is valid, then submitting emits a body the shared schema accepts unchanged', async () => {
@@ -99,7 +110,13 @@ describe('LinesetForm', () => {
 
   it('when the form is read-only, then no save, cancel or lift line controls are offered and fields cannot be typed in', () => {
     const w = mountForm({ initial: counterweightSet, readonly: true })
-    for (const testid of ['lineset-save', 'lineset-cancel', 'lineset-add-pick-point', 'lineset-spread-pick-points', 'lineset-remove-pick-point-0'])
+    for (const testid of [
+      'lineset-save',
+      'lineset-cancel',
+      'lineset-add-pick-point',
+      'lineset-spread-pick-points',
+      'lineset-remove-pick-point-0',
+    ])
       expect(w.find(`[data-testid="${testid}"]`).exists(), testid).toBe(false)
     expect(input(w, 'lineset-field-name').attributes('readonly')).toBeDefined()
     expect(input(w, 'lineset-pick-point-0').attributes('readonly')).toBeDefined()

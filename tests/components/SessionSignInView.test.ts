@@ -48,7 +48,9 @@ describe('SessionSignInView', () => {
     vi.mocked(sessionApi.signIn).mockRejectedValue(new ApiError(401, 'bad_credentials', 'Wrong e-mail or password'))
     const { w } = await openSignIn()
     await signIn(w, 'crew@example.test', 'not the password')
-    expect(w.get('[data-testid="sign-in-problem"]').text()).toBe('That e-mail address and password do not match an account here.')
+    expect(w.get('[data-testid="sign-in-problem"]').text()).toBe(
+      'That e-mail address and password do not match an account here.',
+    )
     expect((w.get('[data-testid="sign-in-password"] input').element as HTMLInputElement).value).toBe('')
   })
 
@@ -78,7 +80,9 @@ describe('SessionSignInView', () => {
     vi.mocked(sessionApi.read).mockClear()
     await useSessionStore().signIn({ email: 'crew@example.test', password: 'correct horse battery' })
     expect(sessionApi.read).toHaveBeenCalledOnce()
-    expect(vi.mocked(sessionApi.read).mock.invocationCallOrder[0]).toBeLessThan(vi.mocked(sessionApi.signIn).mock.invocationCallOrder.at(-1) ?? 0)
+    expect(vi.mocked(sessionApi.read).mock.invocationCallOrder[0]).toBeLessThan(
+      vi.mocked(sessionApi.signIn).mock.invocationCallOrder.at(-1) ?? 0,
+    )
     expect(useSessionStore().user?.role).toBe('stage-manager')
   })
 

@@ -23,7 +23,8 @@ function openSettings() {
   return wrapper
 }
 
-const shown = (w: VueWrapper, testid: string) => (w.get(`[data-testid="${testid}"] input`).element as HTMLInputElement).value
+const shown = (w: VueWrapper, testid: string) =>
+  (w.get(`[data-testid="${testid}"] input`).element as HTMLInputElement).value
 const choose = async (w: VueWrapper, system: string) => {
   await w.get(`[data-testid="venue-unit-system"] input[value="${system}"]`).setValue(true)
   await flushPromises()
@@ -48,6 +49,11 @@ describe('VenueSettingsView', () => {
     await w.get('[data-testid="venue-form"]').trigger('submit')
     await flushPromises()
     const [body] = vi.mocked(venueApi.update).mock.calls[0] ?? []
-    expect(body).toMatchObject({ unitSystem: 'metric', balanceTolerance: 4.5359237, ropeLockHolding: 22.6796185, version: 1 })
+    expect(body).toMatchObject({
+      unitSystem: 'metric',
+      balanceTolerance: 4.5359237,
+      ropeLockHolding: 22.6796185,
+      version: 1,
+    })
   })
 })

@@ -82,7 +82,12 @@ describe('api client', () => {
   })
 
   it('when a field is refused, then the field messages arrive with the error', async () => {
-    api.defaults.adapter = answer(400, { error: { code: 'validation_failed', message: 'Check', fields: { 'pickPoints.2': 'Beyond the end' } } })
-    await expect(api.post('/linesets', {})).rejects.toMatchObject({ status: 400, fields: { 'pickPoints.2': 'Beyond the end' } })
+    api.defaults.adapter = answer(400, {
+      error: { code: 'validation_failed', message: 'Check', fields: { 'pickPoints.2': 'Beyond the end' } },
+    })
+    await expect(api.post('/linesets', {})).rejects.toMatchObject({
+      status: 400,
+      fields: { 'pickPoints.2': 'Beyond the end' },
+    })
   })
 })

@@ -5,7 +5,11 @@ describe('pipeOptions', () => {
   it('when the venue is imperial, then 1-1/2 in Schedule 40 offers its table figures', () => {
     const pipe = pipeOptions('imperial').find((option) => option.value === 'nps-1-1/2-sch40')
     // ASME B36.10M: 2.72 lb/ft; I 0.310 in^4 and S 0.326 in^3 on the nominal wall.
-    expect(pipe?.figures).toEqual({ pipeWeightPerLength: 2.72, pipeMomentOfInertia: expect.closeTo(0.31, 3), pipeSectionModulus: expect.closeTo(0.326, 3) })
+    expect(pipe?.figures).toEqual({
+      pipeWeightPerLength: 2.72,
+      pipeMomentOfInertia: expect.closeTo(0.31, 3),
+      pipeSectionModulus: expect.closeTo(0.326, 3),
+    })
   })
 
   it('when the venue is metric, then the same pipe is offered in kg/m', () => {

@@ -19,7 +19,11 @@ interface Started {
 }
 
 function start(extraEnv: NodeJS.ProcessEnv = {}): Started {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'scripts/start.ts'], { cwd: projectRoot, env: { ...env, ...extraEnv }, stdio: ['ignore', 'pipe', 'pipe'] })
+  const child = spawn(process.execPath, ['--import', 'tsx', 'scripts/start.ts'], {
+    cwd: projectRoot,
+    env: { ...env, ...extraEnv },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  })
   let output = ''
   child.stdout!.on('data', (chunk) => (output += chunk))
   child.stderr!.on('data', (chunk) => (output += chunk))
@@ -30,7 +34,8 @@ function start(extraEnv: NodeJS.ProcessEnv = {}): Started {
 async function until(started: Started, text: string, ms = 90_000) {
   const deadline = Date.now() + ms
   while (!started.output().includes(text)) {
-    if (Date.now() > deadline || started.child.exitCode !== null) throw new Error(`no "${text}" in:\n${started.output()}`)
+    if (Date.now() > deadline || started.child.exitCode !== null)
+      throw new Error(`no "${text}" in:\n${started.output()}`)
     await new Promise((r) => setTimeout(r, 100))
   }
 }
@@ -40,7 +45,13 @@ afterAll(() => rmSync(clusterRoot, { recursive: true, force: true }))
 describe('npm start', () => {
   it('when started twice on one data folder and stopped with Ctrl-C, then it serves the demo, keeps the data, refuses a busy port in one line and leaves nothing running', async () => {
     const port = await freePort()
-    env = { ...process.env, PORT: String(port), LOFTLEDGER_CLUSTER: cluster, LOFTLEDGER_PG_PORT: String(await freePort()), NODE_ENV: 'development' }
+    env = {
+      ...process.env,
+      PORT: String(port),
+      LOFTLEDGER_CLUSTER: cluster,
+      LOFTLEDGER_PG_PORT: String(await freePort()),
+      NODE_ENV: 'development',
+    }
     delete env.DATABASE_URL
     delete env.SESSION_SECRET
 
@@ -58,7 +69,9 @@ describe('npm start', () => {
 
     const busy = start()
     expect(await busy.exited).toBe(1)
-    expect(busy.output().trim()).toBe(`loftledger: Port ${port} on 127.0.0.1 is already in use; stop whatever uses it or set PORT to another port`)
+    expect(busy.output().trim()).toBe(
+      `loftledger: Port ${port} on 127.0.0.1 is already in use; stop whatever uses it or set PORT to another port`,
+    )
 
     first.child.kill('SIGINT')
     expect(await first.exited).toBe(0)

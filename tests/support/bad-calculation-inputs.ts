@@ -1,6 +1,9 @@
 import { SAMPLE_INPUT } from '../unit/engine/lineset-input.js'
 
-export const withBatten = (batten: Record<string, unknown>) => ({ ...SAMPLE_INPUT, batten: { ...SAMPLE_INPUT.batten, ...batten } })
+export const withBatten = (batten: Record<string, unknown>) => ({
+  ...SAMPLE_INPUT,
+  batten: { ...SAMPLE_INPUT.batten, ...batten },
+})
 export const withItems = (items: unknown[]) => ({ ...SAMPLE_INPUT, items })
 
 /** Bad calculation inputs and the field each must be refused on; shared by the engine's and the API's tests. */
@@ -22,5 +25,9 @@ export const BAD_CALCULATION_INPUTS: ReadonlyArray<[string, unknown, string]> = 
   ['an unknown kind', { ...SAMPLE_INPUT, kind: 'trapeze' }, 'kind'],
   ['a counterweight set with no arbor', { ...SAMPLE_INPUT, arbor: undefined }, 'arbor'],
   ['an unknown pipe size', withBatten({ pipeSize: 'nps-9' }), 'batten.pipeSize'],
-  ['a fractional brick count', { ...SAMPLE_INPUT, bricks: [{ name: 'full', weight: 20, thickness: 2, available: 1.5 }] }, 'bricks.0.available'],
+  [
+    'a fractional brick count',
+    { ...SAMPLE_INPUT, bricks: [{ name: 'full', weight: 20, thickness: 2, available: 1.5 }] },
+    'bricks.0.available',
+  ],
 ]

@@ -10,7 +10,15 @@ export async function launchChromium(): Promise<{ context: BrowserContext; close
     executablePath: '/usr/bin/chromium',
     headless: true,
     viewport: { width: 1440, height: 900 },
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   })
   return {
     context,

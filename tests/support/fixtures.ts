@@ -39,11 +39,21 @@ export interface VenueFixture {
 }
 
 /** A venue with one member of each role, one lineset and one brick type. */
-export async function seedVenue(db: Database, key: string, unitSystem: 'imperial' | 'metric' = 'imperial'): Promise<VenueFixture> {
+export async function seedVenue(
+  db: Database,
+  key: string,
+  unitSystem: 'imperial' | 'metric' = 'imperial',
+): Promise<VenueFixture> {
   const passwordHash = await bcrypt.hash(PASSWORD, 4) // low cost: test speed only
   return db.sequelize.transaction(async (transaction) => {
     const venue = await db.models.Venue.create(
-      { name: `Venue ${key}`, unitSystem, balanceTolerance: toSI(10, 'weight', 'imperial').toString(), ropeLockHolding: toSI(50, 'weight', 'imperial').toString(), wireRopeDesignFactor: '8' },
+      {
+        name: `Venue ${key}`,
+        unitSystem,
+        balanceTolerance: toSI(10, 'weight', 'imperial').toString(),
+        ropeLockHolding: toSI(50, 'weight', 'imperial').toString(),
+        wireRopeDesignFactor: '8',
+      },
       { transaction },
     )
     const emails = {} as Record<Role, string>
@@ -51,12 +61,18 @@ export async function seedVenue(db: Database, key: string, unitSystem: 'imperial
     for (const role of ROLES) {
       const email = `${role}@${key}.test`
       const user = await db.models.User.create({ email, name: `${role} of ${key}`, passwordHash }, { transaction })
-      const membership = await db.models.Membership.create({ userId: user.id, venueId: venue.id, role }, { transaction })
+      const membership = await db.models.Membership.create(
+        { userId: user.id, venueId: venue.id, role },
+        { transaction },
+      )
       emails[role] = email
       membershipIds[role] = membership.id
     }
     const body = linesetInputSchema.parse(sampleLineset(1))
-    const lineset = await db.models.Lineset.create({ ...linesetFromApi(body, unitSystem), venueId: venue.id, retiredAt: null }, { transaction })
+    const lineset = await db.models.Lineset.create(
+      { ...linesetFromApi(body, unitSystem), venueId: venue.id, retiredAt: null },
+      { transaction },
+    )
     const brick = await db.models.BrickType.create(
       { venueId: venue.id, name: 'Full', material: 'Steel', unitWeight: '9', thickness: '0.05', quantityOwned: 100 },
       { transaction },

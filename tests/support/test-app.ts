@@ -10,7 +10,9 @@ export interface TestApp extends RunningServer {
 }
 
 /** Starts the real server on a free port against a database of its own (or the one given). */
-export async function startTestApp(options: { databaseUrl?: string; env?: Record<string, string> } = {}): Promise<TestApp> {
+export async function startTestApp(
+  options: { databaseUrl?: string; env?: Record<string, string> } = {},
+): Promise<TestApp> {
   const databaseUrl = options.databaseUrl ?? (await createTestDatabase())
   const config = loadConfig({
     NODE_ENV: 'test',

@@ -5,7 +5,12 @@ import type { LinesetInput, LinesetKind } from '../../../shared/schemas/lineset.
 const FIVE_LINES = [4, 14, 24, 34, 44]
 const SIX_LINES = [2, 11, 20, 29, 38, 47]
 
-const PIPE = { pipeSize: 'nps-1-1/2-sch40', pipeWeightPerLength: 2.72, pipeMomentOfInertia: 0.31, pipeSectionModulus: 0.326 }
+const PIPE = {
+  pipeSize: 'nps-1-1/2-sch40',
+  pipeWeightPerLength: 2.72,
+  pipeMomentOfInertia: 0.31,
+  pipeSectionModulus: 0.326,
+}
 const LIFT_LINE = { liftLineWeightPerLength: 0.11, liftLineBreakingStrength: 7000 }
 
 interface Plan {
@@ -67,16 +72,65 @@ function figuresFor(plan: Plan, index: number): Omit<LinesetInput, 'number' | 'n
   const base = { kind, distanceFromPlasterLine, notes: plan.notes ?? '', ...LIFT_LINE }
   switch (kind) {
     case 'counterweight-single':
-      return { ...base, ...PIPE, battenLength: 48, pickPoints: plan.lines ?? FIVE_LINES, arborEmptyWeight: 90, arborCapacity: 1400, arborStackLength: 72, ratedLoad: 1200, pipeWeight: 155, travel: 56 }
+      return {
+        ...base,
+        ...PIPE,
+        battenLength: 48,
+        pickPoints: plan.lines ?? FIVE_LINES,
+        arborEmptyWeight: 90,
+        arborCapacity: 1400,
+        arborStackLength: 72,
+        ratedLoad: 1200,
+        pipeWeight: 155,
+        travel: 56,
+      }
     case 'counterweight-double':
-      return { ...base, ...PIPE, battenLength: 49, pickPoints: plan.lines ?? SIX_LINES, arborEmptyWeight: 110, arborCapacity: 3000, arborStackLength: 84, ratedLoad: 1400, pipeWeight: 320, travel: 56 }
+      return {
+        ...base,
+        ...PIPE,
+        battenLength: 49,
+        pickPoints: plan.lines ?? SIX_LINES,
+        arborEmptyWeight: 110,
+        arborCapacity: 3000,
+        arborStackLength: 84,
+        ratedLoad: 1400,
+        pipeWeight: 320,
+        travel: 56,
+      }
     case 'motorized':
-      return { ...base, ...PIPE, battenLength: 40, pickPoints: [2, 14, 26, 38], ratedLoad: 2000, hoistRatedCapacity: 2000, hoistSpeed: 180, travel: 56 }
+      return {
+        ...base,
+        ...PIPE,
+        battenLength: 40,
+        pickPoints: [2, 14, 26, 38],
+        ratedLoad: 2000,
+        hoistRatedCapacity: 2000,
+        hoistSpeed: 180,
+        travel: 56,
+      }
     case 'hemp-multi':
-      return { ...base, ...PIPE, battenLength: 48, pickPoints: plan.lines ?? [4, 24, 44], ratedLoad: 250, sandbagWeight: plan.notes ? 60 : null, travel: 50, liftLineWeightPerLength: 0.04, liftLineBreakingStrength: 1400 }
+      return {
+        ...base,
+        ...PIPE,
+        battenLength: 48,
+        pickPoints: plan.lines ?? [4, 24, 44],
+        ratedLoad: 250,
+        sandbagWeight: plan.notes ? 60 : null,
+        travel: 50,
+        liftLineWeightPerLength: 0.04,
+        liftLineBreakingStrength: 1400,
+      }
     case 'hemp-single':
     case 'spot-line':
-      return { ...base, pipeSize: 'custom', pipeWeightPerLength: 0, battenLength: 1, pickPoints: plan.lines ?? [0.5], ratedLoad: kind === 'spot-line' ? 500 : 150, travel: 50 }
+      return {
+        ...base,
+        pipeSize: 'custom',
+        pipeWeightPerLength: 0,
+        battenLength: 1,
+        pickPoints: plan.lines ?? [0.5],
+        ratedLoad: kind === 'spot-line' ? 500 : 150,
+        travel: 50,
+      }
   }
 }
 

@@ -24,12 +24,18 @@ export async function seedDemoIfEmpty(db: Database): Promise<boolean> {
       { transaction },
     )
     for (const person of DEMO_PEOPLE) {
-      const user = await db.models.User.create({ email: person.email, name: person.name, passwordHash }, { transaction })
+      const user = await db.models.User.create(
+        { email: person.email, name: person.name, passwordHash },
+        { transaction },
+      )
       await db.models.Membership.create({ userId: user.id, venueId: venue.id, role: person.role }, { transaction })
     }
     for (const lineset of DEMO_LINESETS) {
       const valid = linesetInputSchema.parse(lineset) // demo data obeys the same contract as the form
-      await db.models.Lineset.create({ ...linesetFromApi(valid, 'imperial'), venueId: venue.id, retiredAt: null }, { transaction })
+      await db.models.Lineset.create(
+        { ...linesetFromApi(valid, 'imperial'), venueId: venue.id, retiredAt: null },
+        { transaction },
+      )
     }
     for (const brick of DEMO_BRICK_TYPES) {
       await db.models.BrickType.create(

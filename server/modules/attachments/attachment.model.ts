@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize'
 import { uuidKey, requiredText, requiredUuid, optionalUuid } from '../../db/columns.js'
 
 /** An uploaded file (photo, drawing, inspection report); the bytes live in storage under `storageKey`. */

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize'
 import { uuidKey, lockVersion, timestamps, requiredDecimal, requiredText, requiredUuid } from '../../db/columns.js'
 
 /** unitWeight in kg, thickness in m (SI decimal strings). */

@@ -16,9 +16,15 @@ export function brickTypeRoutes(db: Database) {
   router.post('/', requireRole(INVENTORY_EDITORS), validate({ body: brickTypeInputSchema }), async (req, res) => {
     res.status(201).json(await brickTypes.createBrickType(db, currentUser(req), req.body))
   })
-  router.put('/:id', requireRole(INVENTORY_EDITORS), byId, validate({ body: brickTypeUpdateSchema }), async (req, res) => {
-    res.json(await brickTypes.updateBrickType(db, currentUser(req), req.params.id as string, req.body))
-  })
+  router.put(
+    '/:id',
+    requireRole(INVENTORY_EDITORS),
+    byId,
+    validate({ body: brickTypeUpdateSchema }),
+    async (req, res) => {
+      res.json(await brickTypes.updateBrickType(db, currentUser(req), req.params.id as string, req.body))
+    },
+  )
   router.delete('/:id', requireRole(INVENTORY_EDITORS), byId, async (req, res) => {
     await brickTypes.deleteBrickType(db, currentUser(req), req.params.id as string)
     res.status(204).end()

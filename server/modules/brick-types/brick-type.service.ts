@@ -48,7 +48,12 @@ export async function createBrickType(db: Database, actor: SessionUser, body: Br
   return toApi(row, system)
 }
 
-export async function updateBrickType(db: Database, actor: SessionUser, id: string, body: BrickTypeUpdate): Promise<BrickType> {
+export async function updateBrickType(
+  db: Database,
+  actor: SessionUser,
+  id: string,
+  body: BrickTypeUpdate,
+): Promise<BrickType> {
   const system = await venueUnitSystem(db, actor.venueId)
   const { version, ...fields } = body
   if (!(await db.models.BrickType.count({ where: { id, venueId: actor.venueId } }))) throw notFound('That brick type')

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize'
 import { uuidKey, optionalDecimal, requiredText, requiredUuid } from '../../db/columns.js'
 
 /** One thing on a hang: a point load (`weight` at `at`) or a spread load (`weightPerLength` from..to). SI strings. */
@@ -14,7 +21,6 @@ export function defineHangItemModel(sequelize: Sequelize) {
     declare toPosition: string | null
     declare weightPerLength: string | null
   }
-  const quantity = () => (optionalDecimal())
   HangItemModel.init(
     {
       ...uuidKey(),

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize'
 import { uuidKey, lockVersion, timestamps, requiredText, requiredUuid, optionalUuid } from '../../db/columns.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 

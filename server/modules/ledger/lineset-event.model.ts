@@ -1,9 +1,19 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize'
 import { requiredText, requiredUuid, optionalUuid } from '../../db/columns.js'
 
 /** One entry in a lineset's append-only ledger (the database refuses updates and deletes). */
 export function defineLinesetEventModel(sequelize: Sequelize) {
-  class LinesetEventModel extends Model<InferAttributes<LinesetEventModel>, InferCreationAttributes<LinesetEventModel>> {
+  class LinesetEventModel extends Model<
+    InferAttributes<LinesetEventModel>,
+    InferCreationAttributes<LinesetEventModel>
+  > {
     declare id: CreationOptional<string>
     declare venueId: string
     declare linesetId: string

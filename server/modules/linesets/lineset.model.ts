@@ -1,5 +1,20 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
-import { uuidKey, lockVersion, timestamps, optionalDecimal, requiredDecimal, requiredText, requiredUuid } from '../../db/columns.js'
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize'
+import {
+  uuidKey,
+  lockVersion,
+  timestamps,
+  optionalDecimal,
+  requiredDecimal,
+  requiredText,
+  requiredUuid,
+} from '../../db/columns.js'
 import type { LinesetKind, LinesetStatus } from '../../../shared/schemas/lineset.js'
 
 /** Quantities are SI decimal strings (m, kg, kg/m, m^4, m^3, m/s); see lineset.mapper.ts. */
@@ -35,8 +50,6 @@ export function defineLinesetModel(sequelize: Sequelize) {
     declare createdAt: CreationOptional<Date>
     declare updatedAt: CreationOptional<Date>
   }
-  // A fresh object per attribute: Sequelize writes each attribute's column name into its definition.
-  const quantity = () => (optionalDecimal())
   LinesetModel.init(
     {
       ...uuidKey(),

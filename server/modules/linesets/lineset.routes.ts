@@ -19,9 +19,15 @@ export function linesetRoutes(db: Database) {
   router.post('/', requireRole(INVENTORY_EDITORS), validate({ body: linesetInputSchema }), async (req, res) => {
     res.status(201).json(await linesets.createLineset(db, currentUser(req), req.body))
   })
-  router.put('/:id', requireRole(INVENTORY_EDITORS), byId, validate({ body: linesetUpdateSchema }), async (req, res) => {
-    res.json(await linesets.updateLineset(db, currentUser(req), req.params.id as string, req.body))
-  })
+  router.put(
+    '/:id',
+    requireRole(INVENTORY_EDITORS),
+    byId,
+    validate({ body: linesetUpdateSchema }),
+    async (req, res) => {
+      res.json(await linesets.updateLineset(db, currentUser(req), req.params.id as string, req.body))
+    },
+  )
   router.delete('/:id', requireRole(['administrator']), byId, async (req, res) => {
     await linesets.retireLineset(db, currentUser(req), req.params.id as string)
     res.status(204).end()

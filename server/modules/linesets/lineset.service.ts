@@ -36,15 +36,33 @@ export async function createLineset(db: Database, actor: SessionUser, body: Line
   const system = await venueUnitSystem(db, actor.venueId)
   await refuseTakenNumber(db, actor, body.number)
   const row = await db.sequelize.transaction(async (transaction) => {
-    const created = await db.models.Lineset.create({ ...linesetFromApi(body, system), venueId: actor.venueId, retiredAt: null }, { transaction })
-    await appendLinesetEvent(db, { venueId: actor.venueId, linesetId: created.id, actorId: actor.id, eventType: 'lineset-added', payload: { unitSystem: system, lineset: body } }, transaction)
+    const created = await db.models.Lineset.create(
+      { ...linesetFromApi(body, system), venueId: actor.venueId, retiredAt: null },
+      { transaction },
+    )
+    await appendLinesetEvent(
+      db,
+      {
+        venueId: actor.venueId,
+        linesetId: created.id,
+        actorId: actor.id,
+        eventType: 'lineset-added',
+        payload: { unitSystem: system, lineset: body },
+      },
+      transaction,
+    )
     return created
   })
   return linesetToApi(row, system)
 }
 
 /** Saves a whole lineset if nobody changed it since `version` was read; a stale version is a 409, never an overwrite. */
-export async function updateLineset(db: Database, actor: SessionUser, id: string, body: LinesetUpdate): Promise<Lineset> {
+export async function updateLineset(
+  db: Database,
+  actor: SessionUser,
+  id: string,
+  body: LinesetUpdate,
+): Promise<Lineset> {
   const system = await venueUnitSystem(db, actor.venueId)
   await findOwn(db, actor, id)
   await refuseTakenNumber(db, actor, body.number, id)
@@ -55,7 +73,17 @@ export async function updateLineset(db: Database, actor: SessionUser, id: string
       { where: { id, version, ...active(actor.venueId) }, transaction },
     )
     if (count === 0) throw staleVersion(`Lineset ${body.number}`)
-    await appendLinesetEvent(db, { venueId: actor.venueId, linesetId: id, actorId: actor.id, eventType: 'lineset-changed', payload: { unitSystem: system, lineset: fields } }, transaction)
+    await appendLinesetEvent(
+      db,
+      {
+        venueId: actor.venueId,
+        linesetId: id,
+        actorId: actor.id,
+        eventType: 'lineset-changed',
+        payload: { unitSystem: system, lineset: fields },
+      },
+      transaction,
+    )
   })
   return linesetToApi(await findOwn(db, actor, id), system)
 }
@@ -65,6 +93,10 @@ export async function retireLineset(db: Database, actor: SessionUser, id: string
   const row = await findOwn(db, actor, id)
   await db.sequelize.transaction(async (transaction) => {
     await row.update({ retiredAt: new Date(), version: row.version + 1 }, { transaction })
-    await appendLinesetEvent(db, { venueId: actor.venueId, linesetId: id, actorId: actor.id, eventType: 'lineset-retired' }, transaction)
+    await appendLinesetEvent(
+      db,
+      { venueId: actor.venueId, linesetId: id, actorId: actor.id, eventType: 'lineset-retired' },
+      transaction,
+    )
   })
 }

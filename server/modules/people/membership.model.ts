@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize'
+import {
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize'
 import { uuidKey, lockVersion, timestamps, requiredText, requiredUuid } from '../../db/columns.js'
 import type { Role } from '../../../shared/schemas/role.js'
 import type { UserModel } from './user.model.js'

@@ -9,7 +9,14 @@ import type { MembershipModel } from './membership.model.js'
 export const PASSWORD_HASH_ROUNDS = 12
 
 function toApi(row: MembershipModel): Person {
-  return { id: row.id, userId: row.userId, email: row.user!.email, name: row.user!.name, role: row.role, version: row.version }
+  return {
+    id: row.id,
+    userId: row.userId,
+    email: row.user!.email,
+    name: row.user!.name,
+    role: row.role,
+    version: row.version,
+  }
 }
 
 export async function listPeople(db: Database, actor: SessionUser): Promise<Person[]> {
@@ -22,7 +29,11 @@ export async function listPeople(db: Database, actor: SessionUser): Promise<Pers
 }
 
 async function findMember(db: Database, actor: SessionUser, id: string, transaction?: Transaction) {
-  const row = await db.models.Membership.findOne({ where: { id, venueId: actor.venueId }, include: [{ model: db.models.User, as: 'user' }], transaction })
+  const row = await db.models.Membership.findOne({
+    where: { id, venueId: actor.venueId },
+    include: [{ model: db.models.User, as: 'user' }],
+    transaction,
+  })
   if (!row) throw notFound('That person')
   return row
 }
@@ -33,12 +44,24 @@ export async function addPerson(db: Database, actor: SessionUser, body: PersonIn
   const id = await db.sequelize.transaction(async (transaction) => {
     let user = await db.models.User.findOne({ where: { email: body.email }, transaction })
     if (!user) {
-      if (!passwordHash) throw new AppError(400, 'validation_failed', 'A new account needs a password', { password: 'Enter a password for the new account' })
+      if (!passwordHash)
+        throw new AppError(400, 'validation_failed', 'A new account needs a password', {
+          password: 'Enter a password for the new account',
+        })
       user = await db.models.User.create({ email: body.email, name: body.name, passwordHash }, { transaction })
     }
-    const existing = await db.models.Membership.findOne({ where: { userId: user.id, venueId: actor.venueId }, transaction })
-    if (existing) throw new AppError(409, 'duplicate', `${body.email} already has a role in this venue`, { email: 'Already a member' })
-    const membership = await db.models.Membership.create({ userId: user.id, venueId: actor.venueId, role: body.role }, { transaction })
+    const existing = await db.models.Membership.findOne({
+      where: { userId: user.id, venueId: actor.venueId },
+      transaction,
+    })
+    if (existing)
+      throw new AppError(409, 'duplicate', `${body.email} already has a role in this venue`, {
+        email: 'Already a member',
+      })
+    const membership = await db.models.Membership.create(
+      { userId: user.id, venueId: actor.venueId, role: body.role },
+      { transaction },
+    )
     return membership.id
   })
   return toApi(await findMember(db, actor, id))
@@ -55,9 +78,17 @@ function withMembersLocked<T>(db: Database, actor: SessionUser, work: (transacti
   })
 }
 
-async function refuseLosingLastAdministrator(db: Database, actor: SessionUser, member: MembershipModel, transaction: Transaction) {
+async function refuseLosingLastAdministrator(
+  db: Database,
+  actor: SessionUser,
+  member: MembershipModel,
+  transaction: Transaction,
+) {
   if (member.role !== 'administrator') return
-  const administrators = await db.models.Membership.count({ where: { venueId: actor.venueId, role: 'administrator' }, transaction })
+  const administrators = await db.models.Membership.count({
+    where: { venueId: actor.venueId, role: 'administrator' },
+    transaction,
+  })
   if (administrators <= 1) throw new AppError(409, 'last_administrator', 'A venue must keep at least one administrator')
 }
 
@@ -75,7 +106,8 @@ export async function changeRole(db: Database, actor: SessionUser, id: string, b
 export async function removePerson(db: Database, actor: SessionUser, id: string): Promise<void> {
   await withMembersLocked(db, actor, async (transaction) => {
     const member = await findMember(db, actor, id, transaction)
-    if (member.userId === actor.id) throw new AppError(409, 'cannot_remove_self', 'You cannot remove yourself; ask another administrator')
+    if (member.userId === actor.id)
+      throw new AppError(409, 'cannot_remove_self', 'You cannot remove yourself; ask another administrator')
     await refuseLosingLastAdministrator(db, actor, member, transaction)
     await member.destroy({ transaction })
   })

@@ -16,7 +16,8 @@ export function sessionRoutes(passport: ReturnType<typeof createPassport>, signI
   router.post('/', signInLimiter, validate({ body: signInSchema }), (req, res, next) => {
     passport.authenticate('local', (error: unknown, user: Express.User | false) => {
       if (error) return next(error)
-      if (!user) return next(new AppError(401, 'bad_credentials', 'That e-mail address and password do not match an account'))
+      if (!user)
+        return next(new AppError(401, 'bad_credentials', 'That e-mail address and password do not match an account'))
       // passport regenerates the session here: a new id at sign-in, and so a new CSRF token.
       req.logIn(user, (loginError) => {
         if (loginError) return next(loginError)

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize'
 import { uuidKey, lockVersion, timestamps, optionalDecimal, requiredUuid, optionalUuid } from '../../db/columns.js'
 
 export const TICKET_STATES = ['requested', 'approved', 'declined', 'loaded', 'withdrawn'] as const
@@ -6,7 +13,10 @@ export type TicketState = (typeof TICKET_STATES)[number]
 
 /** A request to move weight on one lineset, decided by a technical director. Weights in kg (SI strings). */
 export function defineWeightChangeTicketModel(sequelize: Sequelize) {
-  class WeightChangeTicketModel extends Model<InferAttributes<WeightChangeTicketModel>, InferCreationAttributes<WeightChangeTicketModel>> {
+  class WeightChangeTicketModel extends Model<
+    InferAttributes<WeightChangeTicketModel>,
+    InferCreationAttributes<WeightChangeTicketModel>
+  > {
     declare id: CreationOptional<string>
     declare venueId: string
     declare linesetId: string

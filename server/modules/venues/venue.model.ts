@@ -1,4 +1,10 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize'
+import {
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize'
 import { uuidKey, lockVersion, timestamps, requiredDecimal, requiredText } from '../../db/columns.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 

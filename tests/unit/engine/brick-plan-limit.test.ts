@@ -3,7 +3,12 @@ import { planBricks } from '../../../shared/engine/brick-plan.js'
 import { runCalculation } from '../../../shared/engine/calculate.js'
 
 // Eight brick types with awkward, many-decimal weights: a stock no house has, but one a request can send.
-const awkward = Array.from({ length: 8 }, (_, k) => ({ name: `b${k}`, weight: 7 + k * 1.37 + 0.000137 * k, thickness: 1 + k * 0.13, available: 50 }))
+const awkward = Array.from({ length: 8 }, (_, k) => ({
+  name: `b${k}`,
+  weight: 7 + k * 1.37 + 0.000137 * k,
+  thickness: 1 + k * 0.13,
+  available: 50,
+}))
 
 describe('the brick plan on an unusual stock', () => {
   it('when the search reaches its work limit, then it answers at once with a plan that still fits and says it is unproven', () => {
@@ -17,16 +22,28 @@ describe('the brick plan on an unusual stock', () => {
 
   it('when the calculation uses such a plan, then a caution tells the crew to check the arbor by hand', () => {
     const outcome = runCalculation({
-      units: 'imperial', kind: 'counterweight-single',
-      batten: { length: 40, weightPerLength: 2.25, pickPoints: [0, 20, 40] }, items: [{ weight: 2000, at: 20 }],
-      arbor: { emptyWeight: 90, capacity: 3000, stackLength: 1000 }, bricks: awkward, tolerance: 10,
+      units: 'imperial',
+      kind: 'counterweight-single',
+      batten: { length: 40, weightPerLength: 2.25, pickPoints: [0, 20, 40] },
+      items: [{ weight: 2000, at: 20 }],
+      arbor: { emptyWeight: 90, capacity: 3000, stackLength: 1000 },
+      bricks: awkward,
+      tolerance: 10,
     })
     if (!outcome.ok) throw new Error(JSON.stringify(outcome.error))
     expect(outcome.result.checks.find((c) => c.code === 'brick-plan-unproven')?.level).toBe('caution')
   })
 
   it('when the stock is ordinary, then the search finishes and proves its plan', () => {
-    const plan = planBricks([{ name: 'full', weight: 19.5, thickness: 2, available: 900 }, { name: 'half', weight: 9.75, thickness: 1, available: 300 }, { name: 'trim', weight: 5, thickness: 0.5, available: 60 }], 3000, 400)
+    const plan = planBricks(
+      [
+        { name: 'full', weight: 19.5, thickness: 2, available: 900 },
+        { name: 'half', weight: 9.75, thickness: 1, available: 300 },
+        { name: 'trim', weight: 5, thickness: 0.5, available: 60 },
+      ],
+      3000,
+      400,
+    )
     expect(plan.complete).toBe(true)
   })
 })

@@ -21,10 +21,13 @@ const position = fc.oneof(
 
 describe('numberDigits', () => {
   it('when a number is found as an integer and places, then they make the very decimal Dec reads from it', () => {
-    fc.assert(fc.property(position, (x) => {
-      const digits = numberDigits(x)
-      if (digits) same(Dec(`${digits.units}e-${digits.scale}`), Dec(x))
-    }), { numRuns: 5000 })
+    fc.assert(
+      fc.property(position, (x) => {
+        const digits = numberDigits(x)
+        if (digits) same(Dec(`${digits.units}e-${digits.scale}`), Dec(x))
+      }),
+      { numRuns: 5000 },
+    )
   })
 
   it('when a figure is typed with a few places, then it is found (the fast path is the usual one)', () => {
@@ -37,27 +40,39 @@ describe('numberDigits', () => {
 
 describe('exactOffset', () => {
   it('when a position is offset from a line, then it equals the decimal subtraction exactly, either way', () => {
-    fc.assert(fc.property(position, position, fc.boolean(), (x, origin, outward) => {
-      const digits = numberDigits(origin)
-      const offset = digits && exactOffset(x, digits, outward)
-      if (offset) same(offset, outward ? Dec(origin).minus(Dec(x)) : Dec(x).minus(Dec(origin)))
-    }), { numRuns: 5000 })
+    fc.assert(
+      fc.property(position, position, fc.boolean(), (x, origin, outward) => {
+        const digits = numberDigits(origin)
+        const offset = digits && exactOffset(x, digits, outward)
+        if (offset) same(offset, outward ? Dec(origin).minus(Dec(x)) : Dec(x).minus(Dec(origin)))
+      }),
+      { numRuns: 5000 },
+    )
   })
 })
 
 describe('scaledDecimal', () => {
   it('when an integer and a scale are read back, then the decimal is the one the string would parse to', () => {
     const units = fc.oneof(fc.integer(), fc.bigInt({ min: -(10n ** 40n) + 1n, max: 10n ** 40n - 1n }))
-    fc.assert(fc.property(units, fc.integer({ min: 0, max: 150 }), (n, scale) => {
-      same(scaledDecimal(n, scale), Dec(`${n}e-${scale}`))
-    }), { numRuns: 5000 })
+    fc.assert(
+      fc.property(units, fc.integer({ min: 0, max: 150 }), (n, scale) => {
+        same(scaledDecimal(n, scale), Dec(`${n}e-${scale}`))
+      }),
+      { numRuns: 5000 },
+    )
   })
 
   it('when a nonzero decimal is split into integer and places and joined again, then it is unchanged', () => {
     // (The running sums never read a zero back this way: zero rows are one shared decimal.)
-    fc.assert(fc.property(position.filter((x) => x !== 0), (x) => {
-      const split = scaledInteger(Dec(x))
-      if (split) same(scaledDecimal(split.units, split.scale), Dec(x))
-    }), { numRuns: 5000 })
+    fc.assert(
+      fc.property(
+        position.filter((x) => x !== 0),
+        (x) => {
+          const split = scaledInteger(Dec(x))
+          if (split) same(scaledDecimal(split.units, split.scale), Dec(x))
+        },
+      ),
+      { numRuns: 5000 },
+    )
   })
 })

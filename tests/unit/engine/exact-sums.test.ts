@@ -11,10 +11,12 @@ function decimalRows(at: D[], coefficient: D[], columns: number): D[][] {
   const rows = [Array.from({ length: columns }, () => Dec(0))]
   at.forEach((x, i) => {
     let term = coefficient[i]!
-    rows.push(rows[rows.length - 1]!.map((total, k) => {
-      if (k > 0) term = term.times(x)
-      return total.plus(term)
-    }))
+    rows.push(
+      rows[rows.length - 1]!.map((total, k) => {
+        if (k > 0) term = term.times(x)
+        return total.plus(term)
+      }),
+    )
   })
   return rows
 }
@@ -27,7 +29,11 @@ const same = (a: D[], b: D[]) => {
 
 /** A figure with up to six decimal places, as a crew or a JSON file could give it. */
 const sixPlaces = (min: number, max: number) =>
-  fc.integer({ min: min * 1e6, max: max * 1e6 }).chain((n) => fc.integer({ min: 0, max: 6 }).map((places) => Dec(String(Math.round(n / 10 ** (6 - places)) / 10 ** places))))
+  fc
+    .integer({ min: min * 1e6, max: max * 1e6 })
+    .chain((n) =>
+      fc.integer({ min: 0, max: 6 }).map((places) => Dec(String(Math.round(n / 10 ** (6 - places)) / 10 ** places))),
+    )
 
 const loads = (maxCoefficient: number, minCoefficient = 0) =>
   fc.array(fc.tuple(sixPlaces(0, 60), sixPlaces(minCoefficient, maxCoefficient)), { maxLength: 30 })
@@ -71,11 +77,18 @@ describe('exact running sums in scaled integers', () => {
     expect(scaledInteger(Dec('1e5'))).toEqual({ units: 100000n, scale: 0 })
   })
 
-  it('when the integers decline a region\'s figures, then its sums are the decimal sums all the same', () => {
-    const awkward = fc.oneof(sixPlaces(0, 500), fc.integer({ min: 1, max: 99 }).map((n) => Dec(n).div(7)))
+  it("when the integers decline a region's figures, then its sums are the decimal sums all the same", () => {
+    const awkward = fc.oneof(
+      sixPlaces(0, 500),
+      fc.integer({ min: 1, max: 99 }).map((n) => Dec(n).div(7)),
+    )
     fc.assert(
       fc.property(fc.array(fc.tuple(sixPlaces(0, 60), awkward), { minLength: 1, maxLength: 20 }), (pairs) => {
-        const points = pairs.map(([u, weight]) => ({ u, weight, float: { u: u.toNumber(), weight: weight.toNumber() } }))
+        const points = pairs.map(([u, weight]) => ({
+          u,
+          weight,
+          float: { u: u.toNumber(), weight: weight.toNumber() },
+        }))
         // Distinct, ascending step positions, some with seven places: fourth powers of those pass 40 digits.
         const stepAt = pairs.map((_, k) => (k % 2 ? Dec(k + 1).plus('0.0000001') : Dec(k + 1)))
         const steps = stepAt.map((at, k) => ({ at, float: at.toNumber(), w: pairs[k]![1], up: k % 3 !== 0 }))
@@ -84,7 +97,11 @@ describe('exact running sums in scaled integers', () => {
         const rises = kept.map((step) => (step.up ? step.w : step.w.neg()))
         const { sums, leaving } = sumRegionLoads(points, steps, Dec(0), Dec(61))
         const ordered = [...points].sort((a, b) => a.u.comparedTo(b.u))
-        const rows = decimalRows(ordered.map((p) => p.u), ordered.map((p) => p.weight), 4)
+        const rows = decimalRows(
+          ordered.map((p) => p.u),
+          ordered.map((p) => p.weight),
+          4,
+        )
         same(totalSums(sums).points, rows[rows.length - 1]!)
         same(sumsBefore(sums, Dec(30)).points, rows[ordered.filter((p) => p.u.lt(30)).length]!)
         const closing = rises.reduce((sum, r) => sum.plus(r), Dec(0))
@@ -94,7 +111,14 @@ describe('exact running sums in scaled integers', () => {
         expect(sums.stepAt.map(String)).toEqual(allAt.map(String))
         const stepRows = decimalRows(allAt, allRises, 5)
         stepRows.forEach((row, i) => same(sums.stepSums.row(i), row))
-        if (pairs.some(([, w]) => !scaledInteger(w))) expect(exactRunningSums(ordered.map((p) => p.u), ordered.map((p) => p.weight), 4)).toBeUndefined()
+        if (pairs.some(([, w]) => !scaledInteger(w)))
+          expect(
+            exactRunningSums(
+              ordered.map((p) => p.u),
+              ordered.map((p) => p.weight),
+              4,
+            ),
+          ).toBeUndefined()
       }),
       { numRuns: 200 },
     )

@@ -28,7 +28,9 @@ export function floatReactions(loads: FloatLoads): number[] {
     matrix.push([...xs.map((xj) => ramp(x, xj, 3) / 6), 1, x])
     rhs.push(-loadShape(x))
   })
-  const weight = loads.points.reduce((s, p) => s + p.weight, 0) + loads.spreads.reduce((s, d) => s + d.weightPerLength * (d.to - d.from), 0)
+  const weight =
+    loads.points.reduce((s, p) => s + p.weight, 0) +
+    loads.spreads.reduce((s, d) => s + d.weightPerLength * (d.to - d.from), 0)
   const moment =
     loads.points.reduce((s, p) => s + p.weight * p.at, 0) +
     loads.spreads.reduce((s, d) => s + (d.weightPerLength * (d.to ** 2 - d.from ** 2)) / 2, 0)

@@ -24,7 +24,8 @@ function totals(loads: FloatLoads) {
   return { weight, moment }
 }
 
-const closeTo = (a: ReturnType<typeof Dec>, b: ReturnType<typeof Dec>) => a.minus(b).abs().lte(Dec.max(1, b.abs()).times('1e-30'))
+const closeTo = (a: ReturnType<typeof Dec>, b: ReturnType<typeof Dec>) =>
+  a.minus(b).abs().lte(Dec.max(1, b.abs()).times('1e-30'))
 
 describe('batten line loads (property tests)', () => {
   it('when any batten is solved, then the line loads sum to the total load and balance its moment about any point', () => {
@@ -33,7 +34,10 @@ describe('batten line loads (property tests)', () => {
         const reactions = solve(loads)
         const { weight, moment } = totals(loads)
         const sum = reactions.reduce((s, r) => s.plus(r), Dec(0))
-        const momentOfLines = reactions.reduce((s, r, k) => s.plus(r.times(Dec(loads.pickPoints[k]!).minus(pivot))), Dec(0))
+        const momentOfLines = reactions.reduce(
+          (s, r, k) => s.plus(r.times(Dec(loads.pickPoints[k]!).minus(pivot))),
+          Dec(0),
+        )
         expect(closeTo(sum, weight)).toBe(true)
         expect(closeTo(momentOfLines, moment.minus(weight.times(pivot)))).toBe(true)
       }),
@@ -44,7 +48,11 @@ describe('batten line loads (property tests)', () => {
   it('when every load is scaled by k, then every line load scales by k', () => {
     fc.assert(
       fc.property(battenLoads, fc.integer({ min: 1, max: 9 }), (loads, k) => {
-        const scaled = { ...loads, points: loads.points.map((p) => ({ ...p, weight: Dec(p.weight).times(k).toNumber() })), spreads: loads.spreads.map((s) => ({ ...s, weightPerLength: Dec(s.weightPerLength).times(k).toNumber() })) }
+        const scaled = {
+          ...loads,
+          points: loads.points.map((p) => ({ ...p, weight: Dec(p.weight).times(k).toNumber() })),
+          spreads: loads.spreads.map((s) => ({ ...s, weightPerLength: Dec(s.weightPerLength).times(k).toNumber() })),
+        }
         const base = solve(loads)
         solve(scaled).forEach((r, i) => expect(closeTo(r, base[i]!.times(k))).toBe(true))
       }),
@@ -64,7 +72,9 @@ describe('batten line loads (property tests)', () => {
           spreads: loads.spreads.map((s) => ({ ...s, from: flip(s.to), to: flip(s.from) })),
         }
         const base = solve(loads)
-        solve(mirrored).reverse().forEach((r, i) => expect(closeTo(r, base[i]!)).toBe(true))
+        solve(mirrored)
+          .reverse()
+          .forEach((r, i) => expect(closeTo(r, base[i]!)).toBe(true))
       }),
       { numRuns: 100 },
     )
@@ -74,14 +84,25 @@ describe('batten line loads (property tests)', () => {
 describe('counterweight (property tests)', () => {
   it('when the same batten side is double purchase, then the arbor needs twice the counterweight of single purchase (common practice)', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 0, max: 300000 }).map((n) => Dec(n).div(100)), fc.integer({ min: 0, max: 300 }), (battenSide, empty) => {
-        const request = { units: 'imperial' as const, battenSide, arbor: { emptyWeight: 0, capacity: 1e6, stackLength: 1e6 }, bricks: [], tolerance: 0 }
-        const single = balanceCounterweight({ ...request, ratio: 1 })
-        const double = balanceCounterweight({ ...request, ratio: 2 })
-        expect(double.required.toString()).toBe(single.required.times(2).toString())
-        const withEmpty = (ratio: 1 | 2) => balanceCounterweight({ ...request, ratio, arbor: { ...request.arbor, emptyWeight: empty } }).required
-        expect(withEmpty(2).plus(empty).toString()).toBe(withEmpty(1).plus(empty).times(2).toString())
-      }),
+      fc.property(
+        fc.integer({ min: 0, max: 300000 }).map((n) => Dec(n).div(100)),
+        fc.integer({ min: 0, max: 300 }),
+        (battenSide, empty) => {
+          const request = {
+            units: 'imperial' as const,
+            battenSide,
+            arbor: { emptyWeight: 0, capacity: 1e6, stackLength: 1e6 },
+            bricks: [],
+            tolerance: 0,
+          }
+          const single = balanceCounterweight({ ...request, ratio: 1 })
+          const double = balanceCounterweight({ ...request, ratio: 2 })
+          expect(double.required.toString()).toBe(single.required.times(2).toString())
+          const withEmpty = (ratio: 1 | 2) =>
+            balanceCounterweight({ ...request, ratio, arbor: { ...request.arbor, emptyWeight: empty } }).required
+          expect(withEmpty(2).plus(empty).toString()).toBe(withEmpty(1).plus(empty).times(2).toString())
+        },
+      ),
     )
   })
 })

@@ -21,7 +21,10 @@ function directSums(region: Region, below?: D) {
   // Below u, a spread contributes Σ Δw·tᵏ over its edges before u: +w at u1, −w at u2.
   const steps = [0, 1, 2, 3, 4].map(() => Dec(0))
   for (const { u1, u2, weightPerLength: w } of region.spreads) {
-    for (const [t, rise] of [[u1, w], [u2, w.neg()]] as const) {
+    for (const [t, rise] of [
+      [u1, w],
+      [u2, w.neg()],
+    ] as const) {
       if (below ? !t.lt(below) : false) continue
       for (let k = 0; k < 5; k++) steps[k] = steps[k]!.plus(rise.times(t.pow(k)))
     }
@@ -32,7 +35,7 @@ function directSums(region: Region, below?: D) {
 const same = (a: D[], b: D[]) => expect(a.map(String)).toEqual(b.map(String))
 
 describe('running sums of a region (each load placed once)', () => {
-  it('when any batten is modelled, then each region\'s totals equal the sums taken load by load, exactly', () => {
+  it("when any batten is modelled, then each region's totals equal the sums taken load by load, exactly", () => {
     fc.assert(
       fc.property(battenLoads, (loads) => {
         for (const region of regions(loads)) {
@@ -64,8 +67,18 @@ describe('running sums of a region (each load placed once)', () => {
   })
 
   it('when spreads cross lines, then the intensity entering each span is the spreads running through its left line', () => {
-    const loads = { length: 30, pickPoints: [0, 10, 20, 30], points: [], spreads: [{ from: 5, to: 25, weightPerLength: 2 }, { from: 0, to: 30, weightPerLength: 1 }] }
-    const [first, middle, last] = buildBattenModel(loads).spans.map((span) => sumsBefore(span.sums, Dec('0.000001')).steps[0]!.toString())
+    const loads = {
+      length: 30,
+      pickPoints: [0, 10, 20, 30],
+      points: [],
+      spreads: [
+        { from: 5, to: 25, weightPerLength: 2 },
+        { from: 0, to: 30, weightPerLength: 1 },
+      ],
+    }
+    const [first, middle, last] = buildBattenModel(loads).spans.map((span) =>
+      sumsBefore(span.sums, Dec('0.000001')).steps[0]!.toString(),
+    )
     expect([first, middle, last]).toEqual(['1', '3', '3'])
   })
 

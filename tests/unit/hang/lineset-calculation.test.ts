@@ -6,12 +6,32 @@ import { calculationInputSchema } from '../../../shared/schemas/calculation.js'
 
 // Invented test lineset in imperial units.
 const lineset: Lineset = {
-  id: '00000000-0000-4000-8000-000000000001', version: 0, updatedAt: '2026-01-01T00:00:00.000Z',
-  number: 1, name: 'Test', kind: 'counterweight-single', status: 'in-service', distanceFromPlasterLine: 2,
-  battenLength: 40, pipeSize: 'nps-1-1/2-sch40', pipeWeightPerLength: 2.72, pipeMomentOfInertia: null, pipeSectionModulus: null,
-  pickPoints: [0, 20, 40], liftLineWeightPerLength: 0.11, liftLineBreakingStrength: 7000, arborEmptyWeight: 90,
-  arborCapacity: 2000, arborStackLength: 60, ratedLoad: 1000, pipeWeight: 18.8, travel: 50, sandbagWeight: null,
-  hoistRatedCapacity: null, hoistSpeed: null, notes: '',
+  id: '00000000-0000-4000-8000-000000000001',
+  version: 0,
+  updatedAt: '2026-01-01T00:00:00.000Z',
+  number: 1,
+  name: 'Test',
+  kind: 'counterweight-single',
+  status: 'in-service',
+  distanceFromPlasterLine: 2,
+  battenLength: 40,
+  pipeSize: 'nps-1-1/2-sch40',
+  pipeWeightPerLength: 2.72,
+  pipeMomentOfInertia: null,
+  pipeSectionModulus: null,
+  pickPoints: [0, 20, 40],
+  liftLineWeightPerLength: 0.11,
+  liftLineBreakingStrength: 7000,
+  arborEmptyWeight: 90,
+  arborCapacity: 2000,
+  arborStackLength: 60,
+  ratedLoad: 1000,
+  pipeWeight: 18.8,
+  travel: 50,
+  sandbagWeight: null,
+  hoistRatedCapacity: null,
+  hoistSpeed: null,
+  notes: '',
 }
 const venue = { unitSystem: 'imperial' as const, balanceTolerance: 10, ropeLockHolding: 50, wireRopeDesignFactor: 8 }
 const brickTypes = [{ name: 'Full', unitWeight: 20, thickness: 2, quantityOwned: 100 }]
@@ -27,10 +47,20 @@ describe('linesetCalculationInput', () => {
   })
 
   it('when a hemp set or a motorized set is mapped, then it carries its sandbag or hoist and no arbor', () => {
-    const hemp = linesetCalculationInput({ lineset: { ...lineset, kind: 'hemp-multi', sandbagWeight: 60 }, venue, brickTypes, items: [] })
+    const hemp = linesetCalculationInput({
+      lineset: { ...lineset, kind: 'hemp-multi', sandbagWeight: 60 },
+      venue,
+      brickTypes,
+      items: [],
+    })
     expect(hemp).toMatchObject({ sandbag: { weight: 60 } })
     expect(hemp.arbor).toBeUndefined()
-    const motor = linesetCalculationInput({ lineset: { ...lineset, kind: 'motorized', hoistRatedCapacity: 2000 }, venue, brickTypes, items: [] })
+    const motor = linesetCalculationInput({
+      lineset: { ...lineset, kind: 'motorized', hoistRatedCapacity: 2000 },
+      venue,
+      brickTypes,
+      items: [],
+    })
     expect(motor).toMatchObject({ hoist: { ratedCapacity: 2000 } })
     expect(runCalculation(motor).ok).toBe(true)
   })

@@ -24,6 +24,8 @@ describe('calculation input validation', () => {
   })
 
   it('when the message is read, then it is plain words naming the figures', () => {
-    expect(fieldsOf(withBatten({ pickPoints: [0, 20, 10] }))['batten.pickPoints.2']).toBe('Pick points must be in order from one end: 10 comes after 20')
+    expect(fieldsOf(withBatten({ pickPoints: [0, 20, 10] }))['batten.pickPoints.2']).toBe(
+      'Pick points must be in order from one end: 10 comes after 20',
+    )
   })
 })

@@ -7,7 +7,12 @@ import { SAMPLE_INPUT } from '../engine/lineset-input.js'
 
 const root = join(import.meta.dirname, '..', '..', '..')
 const calc = (args: string[], input?: string) =>
-  spawnSync(process.execPath, ['--import', 'tsx', 'scripts/calc.ts', ...args], { cwd: root, input, encoding: 'utf8', timeout: 30000 })
+  spawnSync(process.execPath, ['--import', 'tsx', 'scripts/calc.ts', ...args], {
+    cwd: root,
+    input,
+    encoding: 'utf8',
+    timeout: 30000,
+  })
 const folder = mkdtempSync(join(tmpdir(), 'loftledger-calc-'))
 afterAll(() => rmSync(folder, { recursive: true, force: true }))
 const file = (name: string, text: string) => {

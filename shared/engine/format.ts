@@ -1,27 +1,23 @@
-import { roundTo, unitLabel, type Quantity, type UnitSystem } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
+import { displayNumber, displayQuantity, type Quantity, type UnitSystem } from '../units/index.js'
 
 /**
- * A figure for a message: rounded to 0.01, thousands separated, trailing zeros dropped.
+ * A plain figure for a message: rounded to 0.01, thousands separated, trailing zeros dropped.
  *
  * @example
  * formatFigure(1020) // '1,020'
  * formatFigure('-1234.567') // '-1,234.57'
  */
 export function formatFigure(value: Decimal.Value): string {
-  const rounded = roundTo(value, 2)
-  const [whole, fraction] = Math.abs(rounded).toFixed(2).split('.') as [string, string]
-  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',')
-  const tail = fraction.replace(/0+$/, '')
-  return `${rounded < 0 ? '-' : ''}${grouped}${tail ? `.${tail}` : ''}`
+  return displayNumber(value, 2)
 }
 
 /**
- * A figure with its unit label, for a message.
+ * A figure with its unit label, for a message, by the app's one display rule (`DISPLAY_PLACES`).
  *
  * @example
  * formatQuantity(875, 'weight', 'imperial') // '875 lb'
  */
 export function formatQuantity(value: Decimal.Value, quantity: Quantity, units: UnitSystem): string {
-  return `${formatFigure(value)} ${unitLabel(quantity, units)}`
+  return displayQuantity(value, quantity, units)
 }

@@ -1,7 +1,7 @@
 import { findPipeSize } from '../engine/pipes.js'
 import type { BrickType } from '../schemas/brick-type.js'
 import type { CalculationInput } from '../schemas/calculation.js'
-import type { Lineset } from '../schemas/lineset.js'
+import { isCounterweightKind, isHempKind, type Lineset } from '../schemas/lineset.js'
 import type { Venue } from '../schemas/venue.js'
 
 /** One thing hung on a batten: at a point, or spread over a stretch (the whole batten when from/to are left out). */
@@ -26,7 +26,7 @@ export function linesetCalculationInput(options: {
   items: ReadonlyArray<HangItem>
 }): CalculationInput {
   const { lineset, venue } = options
-  const counterweight = lineset.kind === 'counterweight-single' || lineset.kind === 'counterweight-double'
+  const counterweight = isCounterweightKind(lineset.kind)
   const knownPipe = findPipeSize(lineset.pipeSize) ? lineset.pipeSize : undefined
   const handEnteredPipe =
     !knownPipe && present(lineset.pipeMomentOfInertia) && present(lineset.pipeSectionModulus)
@@ -69,8 +69,7 @@ export function linesetCalculationInput(options: {
       available: brick.quantityOwned,
     }))
   }
-  if ((lineset.kind === 'hemp-single' || lineset.kind === 'hemp-multi') && present(lineset.sandbagWeight))
-    input.sandbag = { weight: lineset.sandbagWeight }
+  if (isHempKind(lineset.kind) && present(lineset.sandbagWeight)) input.sandbag = { weight: lineset.sandbagWeight }
   if (lineset.kind === 'motorized' && present(lineset.hoistRatedCapacity))
     input.hoist = { ratedCapacity: lineset.hoistRatedCapacity }
   return input

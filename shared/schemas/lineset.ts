@@ -19,8 +19,12 @@ export type LinesetStatus = (typeof LINESET_STATUSES)[number]
 
 export const MAX_PICK_POINTS = 16
 
+/** Whether a set is balanced by bricks on an arbor (single or double purchase). */
 export const isCounterweightKind = (kind: LinesetKind) =>
   kind === 'counterweight-single' || kind === 'counterweight-double'
+
+/** Whether a set is hauled by hand on rope (one line or several), and so may carry a sandbag. */
+export const isHempKind = (kind: LinesetKind) => kind === 'hemp-single' || kind === 'hemp-multi'
 
 /** Pipe choice: a key of the standard pipe table, or `custom` with figures entered by hand. */
 const pipeSize = z.string({ error: 'Choose a pipe size' }).trim().min(1, 'Choose a pipe size').max(40)

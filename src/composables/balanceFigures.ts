@@ -1,15 +1,14 @@
-import { formatQuantity } from '../../shared/engine/format.js'
 import type { CheckLevel } from '../../shared/schemas/calculation-result.js'
 import type { Quantity, UnitSystem } from '../../shared/units/index.js'
+import { formatFigure } from './figures'
 
 /**
- * A result figure in the venue's units, at most two decimals (the engine's own message format).
+ * A result figure in the venue's units, by the app's one display rule (the same as lists and the engine's messages).
  *
  * @example
  * showFigure(1016.564, 'weight', 'imperial') // '1,016.56 lb'
  */
-export const showFigure = (value: number, quantity: Quantity, units: UnitSystem) =>
-  formatQuantity(value, quantity, units)
+export const showFigure = (value: number, quantity: Quantity, units: UnitSystem) => formatFigure(value, quantity, units)
 
 /**
  * The out-of-balance figure in words. The engine states it at the batten: positive when the batten side is heavier.

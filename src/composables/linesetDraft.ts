@@ -1,8 +1,7 @@
 import type { LinesetInput, LinesetKind, LinesetStatus } from '../../shared/schemas/index.js'
-import { isCounterweightKind, LINESET_FIGURE_QUANTITIES } from '../../shared/schemas/index.js'
+import { isCounterweightKind, isHempKind, LINESET_FIGURE_QUANTITIES } from '../../shared/schemas/index.js'
 import { roundTo, type UnitSystem } from '../../shared/units/index.js'
 import type { ExactFigures } from './exactFigures'
-import { isHempKind } from './linesetLabels'
 
 /** The figures of a lineset and the quantity each is entered in. */
 export const FIGURE_QUANTITIES = LINESET_FIGURE_QUANTITIES

@@ -22,5 +22,3 @@ export const STATUS_COLORS: Readonly<Record<LinesetStatus, string>> = {
   'needs-inspection': 'warning',
   'out-of-service': 'error',
 }
-
-export const isHempKind = (kind: LinesetKind) => kind === 'hemp-single' || kind === 'hemp-multi'

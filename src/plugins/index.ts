@@ -4,11 +4,12 @@ import vuetify from './vuetify'
 import router from '../router'
 import { whenSignedOut } from '../api/client'
 import { signInFor } from '../router/guard'
-import { forgetSignedInData } from '../stores/forget'
+import { forgetfulStores, forgetSignedInData } from '../stores/forget'
 
 /** Registers vuetify, pinia and the router, and decides what a lapsed session does. */
 export function registerPlugins(app: App) {
   const pinia = createPinia()
+  pinia.use(forgetfulStores)
   app.use(vuetify).use(pinia).use(router)
 
   whenSignedOut(() => {

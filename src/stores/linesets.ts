@@ -29,10 +29,5 @@ export const useLinesetsStore = defineStore('linesets', () => {
     items.value = items.value.filter((item) => item.id !== id)
   }
 
-  function clear() {
-    items.value = []
-    loaded.value = false
-  }
-
-  return { items, loaded, loadAll, loadOne, create, update, remove, clear }
+  return { items, loaded, loadAll, loadOne, create, update, remove }
 })

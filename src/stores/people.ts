@@ -28,10 +28,5 @@ export const usePeopleStore = defineStore('people', () => {
     items.value = items.value.filter((item) => item.id !== id)
   }
 
-  function clear() {
-    items.value = []
-    loaded.value = false
-  }
-
-  return { items, loaded, loadAll, add, update, remove, clear }
+  return { items, loaded, loadAll, add, update, remove }
 })

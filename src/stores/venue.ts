@@ -19,9 +19,5 @@ export const useVenueStore = defineStore('venue', () => {
     return venue.value
   }
 
-  function clear() {
-    venue.value = null
-  }
-
-  return { venue, unitSystem, load, save, clear }
+  return { venue, unitSystem, load, save }
 })

@@ -6,11 +6,9 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize'
+import type { HangState } from '../../../shared/schemas/workflow-states.js'
 import { uuidKey, lockVersion, timestamps, requiredText, requiredUuid, optionalUuid } from '../../db/columns.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
-
-export const HANG_STATES = ['draft', 'awaiting-approval', 'approved', 'loaded', 'struck'] as const
-export type HangState = (typeof HANG_STATES)[number]
 
 /** What hangs on one lineset for a show, with the engine's input and answer as saved by the server. */
 export function defineHangModel(sequelize: Sequelize) {

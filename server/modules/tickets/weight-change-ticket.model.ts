@@ -6,10 +6,8 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize'
+import type { TicketState } from '../../../shared/schemas/workflow-states.js'
 import { uuidKey, lockVersion, timestamps, optionalDecimal, requiredUuid, optionalUuid } from '../../db/columns.js'
-
-export const TICKET_STATES = ['requested', 'approved', 'declined', 'loaded', 'withdrawn'] as const
-export type TicketState = (typeof TICKET_STATES)[number]
 
 /** A request to move weight on one lineset, decided by a technical director. Weights in kg (SI strings). */
 export function defineWeightChangeTicketModel(sequelize: Sequelize) {

@@ -1,0 +1,215 @@
+import fc from 'fast-check'
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { databaseFingerprint } from '../support/database-fingerprint.js'
+import { sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
+import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+
+// A few hundred generated bad bodies across every write route, sent by an administrator (who may call
+// them all): none may answer 500 or show a stack, and a refused request must write nothing.
+
+type Json = null | boolean | number | string | Json[] | { [key: string]: Json }
+interface Target {
+  method: 'post' | 'put' | 'delete'
+  path: (venue: VenueFixture) => string
+  valid: (venue: VenueFixture) => Record<string, Json>
+}
+
+const calculation = {
+  units: 'imperial',
+  kind: 'counterweight-single',
+  batten: { length: 40, weightPerLength: 2.72, pickPoints: [0, 20, 40] },
+  items: [{ weight: 200, at: 20 }],
+  arbor: { emptyWeight: 90, capacity: 1400, stackLength: 72 },
+  bricks: [{ name: 'full', weight: 19.5, thickness: 2, available: 100 }],
+}
+
+const TARGETS: Target[] = [
+  {
+    method: 'put',
+    path: () => '/api/v1/venue',
+    valid: () => ({
+      name: 'V',
+      unitSystem: 'imperial',
+      balanceTolerance: 10,
+      ropeLockHolding: 50,
+      wireRopeDesignFactor: 8,
+      version: 999,
+    }),
+  },
+  { method: 'post', path: () => '/api/v1/linesets', valid: () => ({ ...sampleLineset(500) }) as Record<string, Json> },
+  {
+    method: 'put',
+    path: (v) => `/api/v1/linesets/${v.linesetId}`,
+    valid: () => ({ ...sampleLineset(1), version: 999 }) as Record<string, Json>,
+  },
+  {
+    method: 'post',
+    path: () => '/api/v1/brick-types',
+    valid: () => ({ name: 'Fuzz', material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5 }),
+  },
+  {
+    method: 'put',
+    path: (v) => `/api/v1/brick-types/${v.brickTypeId}`,
+    valid: () => ({ name: 'Full', material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5, version: 999 }),
+  },
+  {
+    method: 'post',
+    path: () => '/api/v1/people',
+    valid: () => ({ email: 'fuzz@alpha.test', name: 'Fuzz', role: 'stage-manager', password: 'a-long-password-here' }),
+  },
+  {
+    method: 'put',
+    path: (v) => `/api/v1/people/${v.membershipIds['stage-manager']}`,
+    valid: () => ({ role: 'stage-manager', version: 999 }),
+  },
+  { method: 'post', path: () => '/api/v1/calculations', valid: () => calculation as Record<string, Json> },
+]
+
+const oddValues: Json[] = [
+  null,
+  true,
+  '',
+  '\u0000',
+  'a\u0000b',
+  '\ud800',
+  'x\udfff',
+  'x'.repeat(5000),
+  1e308,
+  -1e308,
+  1e21,
+  1e-308,
+  1e-7,
+  -1,
+  0,
+  2147483647,
+  2 ** 53,
+  '1e999',
+  'NaN',
+  ' 12 ',
+  [],
+  {},
+  [[[]]],
+  { $gt: 1 },
+]
+const oddValue: fc.Arbitrary<Json> = fc.oneof(
+  fc.constantFrom(...oddValues),
+  fc.string(),
+  fc.integer(),
+  fc.double({ noNaN: true, noDefaultInfinity: true }),
+  fc.jsonValue({ maxDepth: 2 }) as fc.Arbitrary<Json>,
+)
+
+/** Every path to a value inside a body, nested objects and arrays included (two levels down). */
+function pathsOf(value: Json, prefix: (string | number)[] = [], depth = 0): (string | number)[][] {
+  if (depth > 2 || value === null || typeof value !== 'object') return [prefix]
+  const keys: (string | number)[] = Array.isArray(value) ? value.map((_, index) => index) : Object.keys(value)
+  return [prefix, ...keys.flatMap((key) => pathsOf((value as Record<string, Json>)[key]!, [...prefix, key], depth + 1))]
+}
+
+function withValueAt(body: Json, path: (string | number)[], replacement: Json): Json {
+  if (path.length === 0) return replacement
+  const copy = JSON.parse(JSON.stringify(body)) as Record<string | number, Json>
+  let cursor = copy
+  for (const key of path.slice(0, -1)) cursor = cursor[key] as Record<string | number, Json>
+  cursor[path.at(-1)!] = replacement
+  return copy
+}
+
+const badBody = (valid: Record<string, Json>) =>
+  fc.oneof(
+    {
+      weight: 4,
+      arbitrary: fc
+        .tuple(fc.constantFrom(...pathsOf(valid)), oddValue)
+        .map(([path, odd]) => withValueAt(valid, path, odd)),
+    },
+    {
+      weight: 1,
+      arbitrary: fc.constantFrom(...Object.keys(valid)).map((key) => ({ ...valid, [key]: undefined }) as Json),
+    },
+    { weight: 1, arbitrary: fc.jsonValue({ maxDepth: 3 }) as fc.Arbitrary<Json> },
+  )
+
+let app: TestApp
+let venue: VenueFixture
+let admin: Client
+
+beforeAll(async () => {
+  app = await startTestApp()
+  venue = await seedVenue(app.handle.db, 'alpha')
+  admin = await signedIn(app.url, venue.emails.administrator)
+})
+afterAll(() => app.stop())
+
+async function expectCleanAnswer(send: () => PromiseLike<{ status: number; text: string; body: unknown }>) {
+  const before = await databaseFingerprint(app.handle.db.sequelize)
+  const res = await send()
+  expect(res.status, res.text).toBeLessThan(500)
+  expect(res.text).not.toMatch(/\n\s+at |node_modules|Sequelize|TypeError|RangeError/)
+  if (res.status >= 400) {
+    expect((res.body as { error?: { code?: unknown } }).error?.code, res.text).toEqual(expect.any(String))
+    expect(await databaseFingerprint(app.handle.db.sequelize)).toBe(before)
+  }
+}
+
+describe('generated bad requests', () => {
+  for (const target of TARGETS) {
+    it(`when ${target.method.toUpperCase()} ${target.path({ linesetId: ':id', brickTypeId: ':id', membershipIds: { 'stage-manager': ':id' } } as VenueFixture)} gets odd bodies, then it never answers 500 and a refusal writes nothing`, async () => {
+      await fc.assert(
+        fc.asyncProperty(badBody(target.valid(venue)), async (body) => {
+          await expectCleanAnswer(() =>
+            admin.agent[target.method](target.path(venue))
+              .set('X-CSRF-Token', admin.csrfToken)
+              .set('Content-Type', 'application/json')
+              .send(JSON.stringify(body) ?? 'null'),
+          )
+        }),
+        { numRuns: 30, seed: 20261203 },
+      )
+    })
+  }
+
+  // The values a hostile probe found that once answered 500, tried at every field of every write route.
+  const KNOWN_BAD: Json[] = ['a\u0000b', 'x\ud800', 1e21, 1e-308, 2147483647, 1e-7, 2.5e9]
+  for (const target of TARGETS) {
+    it(`when ${target.method.toUpperCase()} ${target.path({ linesetId: ':id', brickTypeId: ':id', membershipIds: { 'stage-manager': ':id' } } as VenueFixture)} gets each known bad value at each field, then none answers 500`, async () => {
+      const valid = target.valid(venue)
+      for (const key of Object.keys(valid))
+        for (const odd of KNOWN_BAD)
+          await expectCleanAnswer(() =>
+            admin.agent[target.method](target.path(venue))
+              .set('X-CSRF-Token', admin.csrfToken)
+              .set('Content-Type', 'application/json')
+              .send(JSON.stringify({ ...valid, [key]: odd })),
+          )
+    })
+  }
+
+  it('when bodies are not JSON at all or ids are odd, then the answer is a clear refusal', async () => {
+    const raw = fc.oneof(
+      fc.string(),
+      fc.constantFrom('{"a":', '[1,2', '\u0000', '{"name": "\\ud800"}', 'null', '"x"', '1e999'),
+    )
+    await fc.assert(
+      fc.asyncProperty(raw, fc.constantFrom('linesets', 'brick-types', 'people'), async (text, noun) => {
+        await expectCleanAnswer(() =>
+          admin.agent
+            .post(`/api/v1/${noun}`)
+            .set('X-CSRF-Token', admin.csrfToken)
+            .set('Content-Type', 'application/json')
+            .send(text),
+        )
+      }),
+      { numRuns: 30, seed: 20261203 },
+    )
+    const id = fc.oneof(fc.string({ minLength: 1 }), fc.constantFrom('%00', '..%2F..', '0'.repeat(500), '%E0%A4%A'))
+    await fc.assert(
+      fc.asyncProperty(id, fc.constantFrom('linesets', 'brick-types', 'people'), async (odd, noun) => {
+        await expectCleanAnswer(() =>
+          admin.agent.delete(`/api/v1/${noun}/${encodeURIComponent(odd)}`).set('X-CSRF-Token', admin.csrfToken),
+        )
+      }),
+      { numRuns: 30, seed: 20261203 },
+    )
+  })
+})

@@ -36,6 +36,24 @@ async function signIn(w: VueWrapper, email: string, password: string) {
 }
 
 describe('SessionSignInView', () => {
+  it('when the page appears and nothing has focus, then the e-mail field takes it once and the form says it is ready', async () => {
+    const { w } = await openSignIn()
+    await flushPromises()
+    expect(document.activeElement).toBe(w.get('[data-testid="sign-in-email"] input').element)
+    expect(w.get('[data-testid="sign-in-form"]').attributes('data-ready')).toBe('true')
+  })
+
+  it('when someone is already typing elsewhere as the page appears, then focus stays where they are', async () => {
+    const elsewhere = document.createElement('input')
+    document.body.appendChild(elsewhere)
+    elsewhere.focus()
+    const { w } = await openSignIn()
+    await flushPromises()
+    expect(document.activeElement).toBe(elsewhere)
+    expect(w.get('[data-testid="sign-in-form"]').attributes('data-ready')).toBe('true')
+    elsewhere.remove()
+  })
+
   it('when the e-mail address is not one, then the form says so without asking the server', async () => {
     const { w } = await openSignIn()
     expect(w.text()).toContain('Loftledger')

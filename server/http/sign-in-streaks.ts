@@ -1,9 +1,9 @@
 import { QueryTypes, type Sequelize } from 'sequelize'
 import { pruneRateLimitHits } from './rate-limit-store.js'
 
-/** Sign-in attempts a streak may make at once before each further attempt must wait. */
+/** Sign-in attempts a streak may make at once; each further attempt must wait. */
 export const FREE_ATTEMPTS = 5
-/** The first wait, doubled after every further failure ... */
+/** The wait after the last free attempt, doubled after every further one ... */
 export const FIRST_WAIT_SECONDS = 1
 /** ... up to this (so a stranger can make at most about 100 guesses a day at one account). */
 export const LONGEST_WAIT_SECONDS = 15 * 60
@@ -11,22 +11,22 @@ export const LONGEST_WAIT_SECONDS = 15 * 60
 export const FORGET_AFTER_SECONDS = 24 * 60 * 60
 
 /**
- * The wait before the next attempt, after `attempts` attempts of a streak without a success.
+ * Seconds the next attempt must wait, after `attempts` attempts of a streak without a success.
  *
  * @example
- * waitAfter(5) // 0
- * waitAfter(6) // 1
- * waitAfter(8) // 4
+ * waitAfter(4) // 0
+ * waitAfter(5) // 1
+ * waitAfter(7) // 4
  */
 export function waitAfter(attempts: number): number {
-  if (attempts <= FREE_ATTEMPTS) return 0
-  return Math.min(LONGEST_WAIT_SECONDS, FIRST_WAIT_SECONDS * 2 ** Math.min(attempts - FREE_ATTEMPTS - 1, 20))
+  if (attempts < FREE_ATTEMPTS) return 0
+  return Math.min(LONGEST_WAIT_SECONDS, FIRST_WAIT_SECONDS * 2 ** Math.min(attempts - FREE_ATTEMPTS, 20))
 }
 
 // The same waits in SQL, for the attempt count `n`; the exponent is capped so power() cannot overflow.
 const waitSql = (n: string) =>
-  `LEAST(${LONGEST_WAIT_SECONDS}, CASE WHEN ${n} <= ${FREE_ATTEMPTS} THEN 0
-     ELSE ${FIRST_WAIT_SECONDS} * power(2, LEAST(${n} - ${FREE_ATTEMPTS} - 1, 20)) END)`
+  `LEAST(${LONGEST_WAIT_SECONDS}, CASE WHEN ${n} < ${FREE_ATTEMPTS} THEN 0
+     ELSE ${FIRST_WAIT_SECONDS} * power(2, LEAST(${n} - ${FREE_ATTEMPTS}, 20)) END)`
 
 const NEXT_ATTEMPTS = `CASE WHEN rate_limit_hits.reset_at + make_interval(secs => ${FORGET_AFTER_SECONDS}) <= now()
   THEN 1 ELSE rate_limit_hits.hits + 1 END`
@@ -51,7 +51,7 @@ export class SignInStreaks {
     await pruneRateLimitHits(this.sequelize)
     const key = this.key(name)
     const claimed = await this.sequelize.query<{ hits: number }>(
-      `INSERT INTO rate_limit_hits (key, hits, reset_at) VALUES (:key, 1, now())
+      `INSERT INTO rate_limit_hits (key, hits, reset_at) VALUES (:key, 1, now() + make_interval(secs => ${waitSql('1')}))
        ON CONFLICT (key) DO UPDATE SET
          hits = ${NEXT_ATTEMPTS},
          reset_at = now() + make_interval(secs => ${waitSql(NEXT_ATTEMPTS)})

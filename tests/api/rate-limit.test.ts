@@ -112,7 +112,7 @@ describe('sign-ins are limited per account, by a growing wait rather than a lock
   it('when the waits go on, then each is twice the one before', async () => {
     const email = beta.emails['stage-manager']
     for (let n = 1; n <= 5; n++) await guessFrom(130 + n, email)
-    const waits: string[] = []
+    const waits: (string | undefined)[] = []
     for (let n = 0; n < 3; n++) {
       await letTheWaitPass(email)
       expect((await guessFrom(140 + n, email)).status).toBe(401)

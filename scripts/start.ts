@@ -11,6 +11,7 @@ import { seedDemoIfEmpty } from '../server/db/seeders/demo.js'
 import { ListenError, startServer } from '../server/index.js'
 import { buildClientIfStale } from './lib/client-build.js'
 import { ensureDatabase } from './lib/database.js'
+import { shouldSeedDemo } from './lib/demo-seeding.js'
 import { loadDotEnv, localSessionSecret } from './lib/local-env.js'
 import { projectRoot } from './lib/paths.js'
 import { startCluster, stopCluster, type Cluster } from './lib/postgres.js'
@@ -34,8 +35,10 @@ async function main() {
       `Port ${port} on ${host} is already in use; stop whatever uses it or set PORT to another port`,
     )
 
+  const privateCluster = !process.env.DATABASE_URL
+  const seedDemo = shouldSeedDemo({ privateCluster, seedDemo: process.env.SEED_DEMO })
   let cluster: Cluster | null = null
-  if (!process.env.DATABASE_URL) {
+  if (privateCluster) {
     say('starting the private PostgreSQL cluster...')
     const name = process.env.LOFTLEDGER_CLUSTER ?? 'postgres'
     cluster = startCluster({ name, port: Number(process.env.LOFTLEDGER_PG_PORT ?? 54329), password: true }).cluster
@@ -51,15 +54,18 @@ async function main() {
     const config = loadConfig({ ...process.env, CLIENT_DIR: process.env.CLIENT_DIR ?? join(projectRoot, 'dist') })
     const setup = connectDatabase(config.databaseUrl)
     await migrate(setup.sequelize, config.databaseUrl)
-    if (await seedDemoIfEmpty({ sequelize: setup.sequelize, models: defineModels(setup.sequelize) }))
+    if (!seedDemo) say('not seeding the demo venue (its passwords are public; SEED_DEMO=true seeds it)')
+    else if (await seedDemoIfEmpty({ sequelize: setup.sequelize, models: defineModels(setup.sequelize) }))
       say('seeded the demo venue')
     await setup.close()
     if (await buildClientIfStale(config.clientDir)) say('built the client')
 
     const running = await startServer(config)
     say(`serving on ${running.url}`)
-    say(`demo sign-ins (password ${DEMO_PASSWORD}):`)
-    for (const person of DEMO_PEOPLE) console.log(`  ${person.email.padEnd(18)} ${person.role}`)
+    if (seedDemo) {
+      say(`demo sign-ins (password ${DEMO_PASSWORD}):`)
+      for (const person of DEMO_PEOPLE) console.log(`  ${person.email.padEnd(18)} ${person.role}`)
+    }
     say('press Ctrl-C to stop')
 
     let stopping = false

@@ -1,14 +1,13 @@
 import { existsSync } from 'node:fs'
 import { join, resolve } from 'node:path'
 import express from 'express'
-import helmet from 'helmet'
 import type { Config } from './config.js'
 import { connectDatabase } from './db/connection.js'
 import { defineModels, type Database } from './db/models.js'
-import { requireCsrfToken } from './http/csrf.js'
+import { csrfProtection } from './http/csrf.js'
 import { apiNotFound, errorHandler } from './http/errors.js'
+import { noStore, securityHeaders } from './http/headers.js'
 import { sessionMiddleware } from './http/session.js'
-import { signInLimiter } from './http/sign-in-limiter.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
 import { calculationRoutes } from './modules/calculations/calculation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
@@ -32,37 +31,27 @@ export function createApp(config: Config): AppHandle {
   const db: Database = { sequelize: connections.sequelize, models: defineModels(connections.sequelize) }
   const sessions = sessionMiddleware(config, connections.sessionPool)
   const passport = createPassport(db)
+  const csrf = csrfProtection(config)
   const app = express()
 
   app.set('trust proxy', config.trustProxy)
   app.disable('x-powered-by')
-  app.use(
-    helmet({
-      contentSecurityPolicy: {
-        directives: {
-          'default-src': ["'self'"],
-          'style-src': ["'self'", "'unsafe-inline'"], // Vuetify sets theme colours in a style element
-          'img-src': ["'self'", 'data:', 'blob:'],
-          'font-src': ["'self'"],
-          'upgrade-insecure-requests': config.secureCookies ? [] : null,
-        },
-      },
-    }),
-  )
+  app.use(securityHeaders(config))
 
   const api = express.Router()
   api.use(express.json({ limit: '1mb' }))
   api.use(sessions.middleware)
   api.use(passport.initialize())
   api.use(passport.session())
-  api.use(requireCsrfToken)
-  api.use('/session', sessionRoutes(passport, signInLimiter(db.sequelize, config.signInAttemptsPerMinute)))
+  api.use(csrf.requireToken)
+  api.use('/session', sessionRoutes({ db, config, passport, csrf }))
   api.use('/venue', venueRoutes(db))
   api.use('/linesets', linesetRoutes(db))
   api.use('/brick-types', brickTypeRoutes(db))
   api.use('/people', peopleRoutes(db))
   api.use('/calculations', calculationRoutes())
   api.use(apiNotFound)
+  app.use('/api', noStore)
   app.use('/api/v1', api)
   app.use('/api', apiNotFound)
 

@@ -16,7 +16,7 @@ const configSchema = z.object({
     .default('0')
     .transform((v) => Number(v === 'false' ? '0' : v === 'true' ? '1' : v))
     .pipe(z.number().int('TRUST_PROXY is a number of proxy hops').min(0).max(10)),
-  /** Send cookies only over HTTPS; on by default in production. */
+  /** The app is served over HTTPS: cookies only over HTTPS, and HSTS. On by default in production. */
   SECURE_COOKIES: z.enum(['true', 'false']).optional(),
   /** Failed sign-ins allowed per address per minute before 429. */
   SIGN_IN_ATTEMPTS_PER_MINUTE: z.coerce.number().int().min(1).default(10),

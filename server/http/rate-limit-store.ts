@@ -46,3 +46,17 @@ export class PostgresRateLimitStore implements Store {
     await this.sequelize.query(`DELETE FROM rate_limit_hits WHERE key = :key`, { replacements: { key: this.key(key) } })
   }
 }
+
+const PRUNE_EVERY_MS = 60 * 60 * 1000
+const lastPruned = new WeakMap<Sequelize, number>()
+
+/**
+ * Deletes counters that ended more than a day ago (attempts at made-up e-mail addresses would otherwise
+ * pile up), at most once an hour per database connection.
+ */
+export async function pruneRateLimitHits(sequelize: Sequelize) {
+  const now = Date.now()
+  if (now - (lastPruned.get(sequelize) ?? 0) < PRUNE_EVERY_MS) return
+  lastPruned.set(sequelize, now)
+  await sequelize.query(`DELETE FROM rate_limit_hits WHERE reset_at < now() - interval '1 day'`)
+}

@@ -1,6 +1,9 @@
 import { z } from 'zod'
 import { ROLES, type Role } from './role.js'
+import { passwordSchema, refusePasswordMatchingEmail } from './password.js'
 import { requiredText, versionField } from './quantity.js'
+
+export { passwordSchema, PASSWORD_RULE } from './password.js'
 
 const email = z
   .string({ error: 'Enter an e-mail address' })
@@ -10,12 +13,9 @@ const email = z
 const role = z.enum(ROLES, { error: 'Choose a role' })
 
 /** Adding someone to the venue: a new account, or an existing account given a role here. */
-export const personInputSchema = z.object({
-  email,
-  name: requiredText(120),
-  role,
-  password: z.string({ error: 'Enter a password' }).min(10, 'At least 10 characters').max(200).optional(),
-})
+export const personInputSchema = z
+  .object({ email, name: requiredText(120), role, password: passwordSchema.optional() })
+  .superRefine(refusePasswordMatchingEmail)
 export type PersonInput = z.infer<typeof personInputSchema>
 
 /** Changing someone's role in this venue. */

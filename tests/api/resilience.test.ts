@@ -62,6 +62,10 @@ describe('a database outage', () => {
       expect(res.body.error.code).toBe('database_unavailable')
       expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts:\d+/)
     }
+    const anonymous = await new Client(app.url).get('/api/v1/session')
+    expect(anonymous.status, 'a signed-out GET /session').toBe(503)
+    expect(anonymous.body.error.code).toBe('database_unavailable')
+    expect(anonymous.headers['set-cookie']).toBeUndefined() // no token for a session that cannot be stored
     await proxy.open()
     let status = 0
     for (let attempt = 0; attempt < 20 && status !== 200; attempt++) {

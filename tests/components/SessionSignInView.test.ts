@@ -72,11 +72,12 @@ describe('SessionSignInView', () => {
     expect((w.get('[data-testid="sign-in-password"] input').element as HTMLInputElement).value).toBe('')
   })
 
-  it('when there were too many attempts, then the person is told to wait', async () => {
-    vi.mocked(sessionApi.signIn).mockRejectedValue(new ApiError(429, 'too_many_attempts', 'Slow down'))
+  it("when there were too many attempts, then the server's words say how long to wait", async () => {
+    const wait = 'Too many failed sign-ins for this e-mail address; try again in 8 seconds'
+    vi.mocked(sessionApi.signIn).mockRejectedValue(new ApiError(429, 'too_many_attempts', wait))
     const { w } = await openSignIn()
     await signIn(w, 'crew@example.test', 'guess')
-    expect(w.get('[data-testid="sign-in-problem"]').text()).toContain('Too many attempts')
+    expect(w.get('[data-testid="sign-in-problem"]').text()).toBe(wait)
   })
 
   it('when sign-in succeeds, then the new token is kept and the person returns to the page they asked for', async () => {

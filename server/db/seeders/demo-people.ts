@@ -1,7 +1,11 @@
+import { PUBLISHED_DEMO_PASSWORD } from '../../../shared/schemas/password.js'
 import type { Role } from '../../../shared/schemas/role.js'
 
-/** The demo sign-ins printed by `npm start` and written in README. Invented people. */
-export const DEMO_PASSWORD = 'loft-demo-2026'
+/**
+ * The demo sign-ins printed by `npm start` and written in README. Invented people. Their password is public,
+ * so the password rules refuse it for every real account.
+ */
+export const DEMO_PASSWORD = PUBLISHED_DEMO_PASSWORD
 
 export const DEMO_PEOPLE: ReadonlyArray<{ email: string; name: string; role: Role }> = [
   { email: 'admin@demo.test', name: 'Imogen Varga', role: 'administrator' },

@@ -1,38 +1,39 @@
-import { Router, type RequestHandler } from 'express'
-import type { createPassport } from './passport.js'
+import { Router } from 'express'
 import { signInSchema } from '../../../shared/schemas/session.js'
-import { AppError } from '../../http/errors.js'
-import { csrfTokenFor } from '../../http/csrf.js'
+import type { Config } from '../../config.js'
+import type { Database } from '../../db/models.js'
+import type { CsrfProtection } from '../../http/csrf.js'
 import { validate } from '../../http/validate.js'
+import type { createPassport } from './passport.js'
+import { signInSteps } from './sign-in.js'
 
-/** `/session`: who is signed in, sign in, sign out. */
-export function sessionRoutes(passport: ReturnType<typeof createPassport>, signInLimiter: RequestHandler) {
+interface SessionRouteNeeds {
+  db: Database
+  config: Config
+  passport: ReturnType<typeof createPassport>
+  csrf: CsrfProtection
+}
+
+/** `/session`: who is signed in, sign in, sign out. Nothing is stored for a session until someone signs in. */
+export function sessionRoutes({ db, config, passport, csrf }: SessionRouteNeeds) {
   const router = Router()
 
-  router.get('/', (req, res) => {
-    res.json({ user: req.user ?? null, csrfToken: csrfTokenFor(req) })
+  router.get('/', async (req, res) => {
+    // Signed in, the session was just read from the database. Signed out, nothing needed it: ask it anyway,
+    // so an outage answers 503 here as everywhere, not a token for a sign-in that cannot work.
+    if (!req.user) await db.sequelize.query('SELECT 1')
+    res.json({ user: req.user ?? null, csrfToken: csrf.tokenFor(req, res) })
   })
 
-  router.post('/', signInLimiter, validate({ body: signInSchema }), (req, res, next) => {
-    passport.authenticate('local', (error: unknown, user: Express.User | false) => {
-      if (error) return next(error)
-      if (!user)
-        return next(new AppError(401, 'bad_credentials', 'That e-mail address and password do not match an account'))
-      // passport regenerates the session here: a new id at sign-in, and so a new CSRF token.
-      req.logIn(user, (loginError) => {
-        if (loginError) return next(loginError)
-        res.json({ user, csrfToken: csrfTokenFor(req) })
-      })
-    })(req, res, next)
-  })
+  router.post('/', validate({ body: signInSchema }), ...signInSteps(db, config, passport, csrf))
 
+  // Destroying (rather than passport's logout, which saves the session first) ends a signed-in session and
+  // stores nothing for a signed-out one.
   router.delete('/', (req, res, next) => {
-    req.logout((logoutError) => {
-      if (logoutError) return next(logoutError)
-      req.session.destroy((destroyError) => {
-        if (destroyError) return next(destroyError)
-        res.clearCookie('loftledger.sid').status(204).end()
-      })
+    req.session.destroy((error) => {
+      if (error) return next(error)
+      csrf.forget(res)
+      res.clearCookie('loftledger.sid').status(204).end()
     })
   })
   return router

@@ -9,14 +9,18 @@ const email = z
   .pipe(z.email('Enter a valid e-mail address'))
 const role = z.enum(ROLES, { error: 'Choose a role' })
 
-/** Adding someone to the venue: a new account, or an existing account given a role here. */
-export const personInputSchema = z.object({
-  email,
-  name: requiredText(120),
-  role,
-  password: z.string({ error: 'Enter a password' }).min(10, 'At least 10 characters').max(200).optional(),
-})
+/**
+ * Adding someone to the venue is inviting them (`POST /people`): whether the address already has an account
+ * is never said; the person accepts from the e-mail and only then holds the role.
+ */
+export const personInputSchema = z.object({ email, name: requiredText(120), role })
 export type PersonInput = z.infer<typeof personInputSchema>
+
+/** A new account's password. */
+export const passwordSchema = z
+  .string({ error: 'Enter a password' })
+  .min(12, 'At least 12 characters')
+  .max(200, 'At most 200 characters')
 
 /** Changing someone's role in this venue. */
 export const personUpdateSchema = z.object({ role, version: versionField() })

@@ -1,5 +1,6 @@
 import type { Pinia } from 'pinia'
 import { useBrickTypesStore } from './brickTypes'
+import { useInvitationsStore } from './invitations'
 import { useLinesetsStore } from './linesets'
 import { usePeopleStore } from './people'
 import { useSessionStore } from './session'
@@ -12,4 +13,5 @@ export function forgetSignedInData(pinia?: Pinia) {
   useLinesetsStore(pinia).clear()
   useBrickTypesStore(pinia).clear()
   usePeopleStore(pinia).clear()
+  useInvitationsStore(pinia).clear()
 }

@@ -8,8 +8,8 @@ let beta: VenueFixture
 
 beforeAll(async () => {
   app = await startTestApp()
-  alpha = await seedVenue(app.handle.db, 'alpha')
-  beta = await seedVenue(app.handle.db, 'beta')
+  alpha = await seedVenue(app.handle.context, 'alpha')
+  beta = await seedVenue(app.handle.context, 'beta')
 })
 afterAll(() => app.stop())
 

@@ -83,13 +83,28 @@ const ROUTES: RouteCase[] = [
   {
     method: 'post',
     path: () => '/api/v1/brick-types',
-    body: (_f, role) => ({ name: `Brick ${role}`, material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5 }),
+    body: (_f, role) => ({
+      name: `Brick ${role}`,
+      material: 'Steel',
+      unitWeight: 20,
+      thickness: 2,
+      quantityOwned: 5,
+      unitSystem: 'imperial',
+    }),
     expected: editors(201),
   },
   {
     method: 'put',
     path: (f) => `/api/v1/brick-types/${f.brickTypeId}`,
-    body: () => ({ name: 'Full', material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5, version: 999 }),
+    body: () => ({
+      name: 'Full',
+      material: 'Steel',
+      unitWeight: 20,
+      thickness: 2,
+      quantityOwned: 5,
+      unitSystem: 'imperial',
+      version: 999,
+    }),
     expected: editors(409),
   },
   { method: 'delete', path: () => '/api/v1/brick-types/00000000-0000-4000-8000-000000000000', expected: editors(404) },
@@ -121,7 +136,7 @@ const clients = {} as Record<Role, Client>
 
 beforeAll(async () => {
   app = await startTestApp()
-  venue = await seedVenue(app.handle.db, 'alpha')
+  venue = await seedVenue(app.handle.context, 'alpha')
   for (const role of ROLES) clients[role] = await signedIn(app.url, venue.emails[role])
 })
 afterAll(() => app.stop())

@@ -66,6 +66,7 @@ const ROUTES: RouteCase[] = [
   },
   { method: 'get', path: () => '/api/v1/linesets', expected: all(200) },
   { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}`, expected: all(200) },
+  { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}/events`, expected: all(200) },
   {
     method: 'post',
     path: () => '/api/v1/linesets',
@@ -116,9 +117,14 @@ const ROUTES: RouteCase[] = [
       email: `new-${role}@alpha.test`,
       name: 'New person',
       role: 'stage-manager',
-      password: 'a-long-password',
     }),
     expected: adminOnly(201),
+  },
+  { method: 'get', path: () => '/api/v1/invitations', expected: adminOnly(200) },
+  {
+    method: 'delete',
+    path: () => '/api/v1/invitations/00000000-0000-4000-8000-000000000000',
+    expected: adminOnly(404),
   },
   {
     method: 'put',

@@ -17,7 +17,7 @@ export class Mailbox {
 
   /** The latest message to `address`. */
   latestTo(address: string): ReceivedMail {
-    const found = this.messages.filter((mail) => mail.to.includes(address)).at(-1)
+    const found = this.messages.filter((mail) => mail.to.includes(address.toLowerCase())).at(-1)
     if (!found)
       throw new Error(`no mail to ${address}; mail so far went to ${this.messages.map((m) => m.to).join(', ')}`)
     return found

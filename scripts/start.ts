@@ -1,11 +1,11 @@
-// `npm start`: the private PostgreSQL cluster, migrations, demo data, the built client and the server,
-// in one process that stops all of it on Ctrl-C.
+// `npm start`: the private PostgreSQL cluster, a local mail sink, migrations, demo data, the built client and
+// the server, in one process that stops all of it on Ctrl-C.
+import { mkdirSync, writeFileSync } from 'node:fs'
 import { createServer } from 'node:net'
-import { join } from 'node:path'
+import { join, relative } from 'node:path'
 import { loadConfig } from '../server/config.js'
 import { connectDatabase } from '../server/db/connection.js'
 import { migrate } from '../server/db/migrate.js'
-import { defineModels } from '../server/db/models.js'
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '../server/db/seeders/demo-people.js'
 import { seedDemoIfEmpty } from '../server/db/seeders/demo.js'
 import { ListenError, startServer } from '../server/index.js'
@@ -13,6 +13,7 @@ import { buildClientIfStale } from './lib/client-build.js'
 import { ensureDatabase } from './lib/database.js'
 import { shouldSeedDemo } from './lib/demo-seeding.js'
 import { loadDotEnv, localSessionSecret } from './lib/local-env.js'
+import { startMailSink, type MailSink, type ReceivedMail } from './lib/mail-sink.js'
 import { projectRoot } from './lib/paths.js'
 import { startCluster, stopCluster, type Cluster } from './lib/postgres.js'
 
@@ -26,6 +27,16 @@ function portIsFree(host: string, port: number) {
   })
 }
 
+/** Keeps each message the local sink takes as a file and says where, so its links can be followed. */
+function keepMail(mail: ReceivedMail) {
+  const folder = join(projectRoot, '.data', 'mail')
+  mkdirSync(folder, { recursive: true })
+  const file = join(folder, `${new Date().toISOString().replace(/[:.]/g, '-')}.eml`)
+  writeFileSync(file, mail.raw)
+  say(`mail to ${mail.to.join(', ')}: "${mail.subject}" (kept in ${relative(projectRoot, file)})`)
+  for (const link of mail.text.match(/https?:\/\/\S+/g) ?? []) console.log(`  ${link}`)
+}
+
 async function main() {
   loadDotEnv()
   const host = process.env.HOST ?? '127.0.0.1'
@@ -37,6 +48,12 @@ async function main() {
 
   const privateCluster = !process.env.DATABASE_URL
   const seedDemo = shouldSeedDemo({ privateCluster, seedDemo: process.env.SEED_DEMO })
+  let mailSink: MailSink | null = null
+  if (!process.env.SMTP_URL) {
+    mailSink = await startMailSink(keepMail)
+    process.env.SMTP_URL = mailSink.url
+    say(`no SMTP_URL: e-mail goes to a local sink on 127.0.0.1:${mailSink.port} and is printed here`)
+  }
   let cluster: Cluster | null = null
   if (privateCluster) {
     say('starting the private PostgreSQL cluster...')
@@ -49,18 +66,18 @@ async function main() {
   const stopDatabase = () => {
     if (cluster) stopCluster(cluster)
   }
+  const stopMail = () => mailSink?.close()
 
   try {
     const config = loadConfig({ ...process.env, CLIENT_DIR: process.env.CLIENT_DIR ?? join(projectRoot, 'dist') })
     const setup = connectDatabase(config.databaseUrl)
     await migrate(setup.sequelize, config.databaseUrl)
-    if (!seedDemo) say('not seeding the demo venue (its passwords are public; SEED_DEMO=true seeds it)')
-    else if (await seedDemoIfEmpty({ sequelize: setup.sequelize, models: defineModels(setup.sequelize) }))
-      say('seeded the demo venue')
     await setup.close()
     if (await buildClientIfStale(config.clientDir)) say('built the client')
 
     const running = await startServer(config)
+    if (!seedDemo) say('not seeding the demo venue (its passwords are public; SEED_DEMO=true seeds it)')
+    else if (await seedDemoIfEmpty(running.handle.context)) say('seeded the demo venue')
     say(`serving on ${running.url}`)
     if (seedDemo) {
       say(`demo sign-ins (password ${DEMO_PASSWORD}):`)
@@ -74,6 +91,7 @@ async function main() {
       stopping = true
       say('stopping...')
       await running.stop()
+      await stopMail()
       stopDatabase()
       say('stopped')
       process.exit(0)
@@ -81,6 +99,7 @@ async function main() {
     process.on('SIGINT', stop)
     process.on('SIGTERM', stop)
   } catch (error) {
+    await stopMail()
     stopDatabase()
     throw error
   }

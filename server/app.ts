@@ -1,7 +1,9 @@
 import { existsSync } from 'node:fs'
 import { join, resolve } from 'node:path'
 import express from 'express'
+import { buildAppContext, type AppOverrides } from './app-context.js'
 import type { Config } from './config.js'
+import type { AppContext } from './context.js'
 import { connectDatabase } from './db/connection.js'
 import { defineModels, type Database } from './db/models.js'
 import { csrfProtection } from './http/csrf.js'
@@ -10,6 +12,7 @@ import { noStore, securityHeaders } from './http/headers.js'
 import { sessionMiddleware } from './http/session.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
 import { calculationRoutes } from './modules/calculations/calculation.routes.js'
+import { invitationRoutes } from './modules/invitations/invitation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
 import { peopleRoutes } from './modules/people/people.routes.js'
 import { createPassport } from './modules/session/passport.js'
@@ -19,18 +22,25 @@ import { venueRoutes } from './modules/venues/venue.routes.js'
 export interface AppHandle {
   app: express.Express
   db: Database
+  /** The application context every module's routes were given. */
+  context: AppContext
   close(): Promise<void>
 }
 
 const log = (error: unknown) =>
   console.error('loftledger:', error instanceof Error ? (error.stack ?? error.message) : error)
 
-/** Builds the whole app (API and, when configured, the built client) on one database. Holds no state of its own. */
-export function createApp(config: Config): AppHandle {
+/**
+ * Builds the whole app (API and, when configured, the built client) on one application context: database,
+ * mail sender, live-event publisher, file storage and clock, each replaceable through `overrides`.
+ * Holds no state of its own.
+ */
+export function createApp(config: Config, overrides: AppOverrides = {}): AppHandle {
   const connections = connectDatabase(config.databaseUrl)
   const db: Database = { sequelize: connections.sequelize, models: defineModels(connections.sequelize) }
+  const context = buildAppContext(config, db, overrides)
   const sessions = sessionMiddleware(config, connections.sessionPool)
-  const passport = createPassport(db)
+  const passport = createPassport(context)
   const csrf = csrfProtection(config)
   const app = express()
 
@@ -45,10 +55,11 @@ export function createApp(config: Config): AppHandle {
   api.use(passport.session())
   api.use(csrf.requireToken)
   api.use('/session', sessionRoutes({ db, config, passport, csrf }))
-  api.use('/venue', venueRoutes(db))
-  api.use('/linesets', linesetRoutes(db))
-  api.use('/brick-types', brickTypeRoutes(db))
-  api.use('/people', peopleRoutes(db))
+  api.use('/venue', venueRoutes(context))
+  api.use('/linesets', linesetRoutes(context))
+  api.use('/brick-types', brickTypeRoutes(context))
+  api.use('/people', peopleRoutes(context))
+  api.use('/invitations', invitationRoutes(context, csrf))
   api.use('/calculations', calculationRoutes())
   api.use(apiNotFound)
   app.use('/api', noStore)
@@ -65,8 +76,10 @@ export function createApp(config: Config): AppHandle {
   return {
     app,
     db,
+    context,
     close: async () => {
       await sessions.close()
+      await context.mail.close()
       await connections.close()
     },
   }

@@ -1,6 +1,7 @@
 import type { Server } from 'node:http'
 import type { AddressInfo } from 'node:net'
 import { createApp, type AppHandle } from './app.js'
+import type { AppOverrides } from './app-context.js'
 import { loadConfig, type Config } from './config.js'
 import { migrate } from './db/migrate.js'
 
@@ -33,8 +34,8 @@ function listen(handle: AppHandle, host: string, port: number): Promise<Server> 
 }
 
 /** Migrates the database, then serves the app. Port 0 picks a free port (tests). */
-export async function startServer(config: Config): Promise<RunningServer> {
-  const handle = createApp(config)
+export async function startServer(config: Config, overrides?: AppOverrides): Promise<RunningServer> {
+  const handle = createApp(config, overrides)
   try {
     await migrate(handle.db.sequelize, config.databaseUrl)
     const server = await listen(handle, config.host, config.port)

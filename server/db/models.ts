@@ -2,6 +2,7 @@ import type { Sequelize } from 'sequelize'
 import { defineAttachmentModel } from '../modules/attachments/attachment.model.js'
 import { defineHangItemModel } from '../modules/hangs/hang-item.model.js'
 import { defineHangModel } from '../modules/hangs/hang.model.js'
+import { defineInvitationModel } from '../modules/invitations/invitation.model.js'
 import { defineWeightChangeTicketModel } from '../modules/tickets/weight-change-ticket.model.js'
 import { defineBrickTypeModel } from '../modules/brick-types/brick-type.model.js'
 import { defineLinesetEventModel } from '../modules/ledger/lineset-event.model.js'
@@ -23,9 +24,11 @@ export function defineModels(sequelize: Sequelize) {
     HangItem: defineHangItemModel(sequelize),
     WeightChangeTicket: defineWeightChangeTicketModel(sequelize),
     Attachment: defineAttachmentModel(sequelize),
+    Invitation: defineInvitationModel(sequelize),
   }
   models.Membership.belongsTo(models.User, { foreignKey: 'userId', as: 'user' })
   models.User.hasMany(models.Membership, { foreignKey: 'userId', as: 'memberships' })
+  models.LinesetEvent.belongsTo(models.User, { foreignKey: 'actorId', as: 'actor' })
   models.Hang.hasMany(models.HangItem, { foreignKey: 'hangId', as: 'items' })
   models.Lineset.hasMany(models.Hang, { foreignKey: 'linesetId', as: 'hangs' })
   return models
@@ -33,7 +36,7 @@ export function defineModels(sequelize: Sequelize) {
 
 export type Models = ReturnType<typeof defineModels>
 
-/** What every service receives: the ORM and its models. */
+/** The ORM and its models; services reach it through their context (see server/context.ts). */
 export interface Database {
   sequelize: Sequelize
   models: Models

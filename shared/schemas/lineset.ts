@@ -1,6 +1,14 @@
 import { z } from 'zod'
 import type { Quantity } from '../units/systems.js'
-import { nonNegative, optionalNonNegative, optionalPositive, positive, requiredText, versionField } from './quantity.js'
+import {
+  nonNegative,
+  optionalNonNegative,
+  optionalPositive,
+  positive,
+  requiredText,
+  typedInField,
+  versionField,
+} from './quantity.js'
 
 /** Every kind of lineset a house may have; each is balanced and checked differently. */
 export const LINESET_KINDS = [
@@ -56,6 +64,7 @@ const linesetFields = z.object({
   hoistRatedCapacity: optionalPositive(),
   hoistSpeed: optionalPositive(),
   notes: z.string().trim().max(2000, 'At most 2000 characters').optional(),
+  unitSystem: typedInField(),
 })
 
 type LinesetFields = z.infer<typeof linesetFields>
@@ -104,7 +113,7 @@ export const linesetUpdateSchema = linesetFields
   .superRefine(checkLineset, whenObject)
 export type LinesetUpdate = z.infer<typeof linesetUpdateSchema>
 
-/** A lineset as the API returns it. */
+/** A lineset as the API returns it; `unitSystem` is the one its figures are in (the venue's). */
 export interface Lineset extends LinesetInput {
   id: string
   version: number

@@ -1,6 +1,5 @@
 import { z } from 'zod'
 import { ROLES, type Role } from './role.js'
-import { passwordSchema, refusePasswordMatchingEmail } from './password.js'
 import { requiredText, versionField } from './quantity.js'
 
 export { passwordSchema, PASSWORD_RULE } from './password.js'
@@ -12,10 +11,11 @@ const email = z
   .pipe(z.email('Enter a valid e-mail address'))
 const role = z.enum(ROLES, { error: 'Choose a role' })
 
-/** Adding someone to the venue: a new account, or an existing account given a role here. */
-export const personInputSchema = z
-  .object({ email, name: requiredText(120), role, password: passwordSchema.optional() })
-  .superRefine(refusePasswordMatchingEmail)
+/**
+ * Adding someone to the venue is inviting them (`POST /people`): whether the address already has an account
+ * is never said; the person accepts from the e-mail and only then holds the role.
+ */
+export const personInputSchema = z.object({ email, name: requiredText(120), role })
 export type PersonInput = z.infer<typeof personInputSchema>
 
 /** Changing someone's role in this venue. */

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { UNIT_SYSTEMS } from '../units/systems.js'
 
 /**
  * Field builders shared by every form and route, so a figure is refused with the
@@ -23,3 +24,9 @@ export const requiredText = (max: number) =>
 
 /** Optimistic-lock token every update carries; a stale one is refused with 409. */
 export const versionField = () => z.number({ error: 'Version is required' }).int().min(0)
+
+/**
+ * The unit system a write's figures were typed in (the venue's, as the form last read it). The server
+ * refuses the write with 409 when the venue has switched since, so 40 ft is never stored as 40 m.
+ */
+export const typedInField = () => z.enum(UNIT_SYSTEMS, { error: 'Say which units the figures were typed in' })

@@ -1,4 +1,4 @@
-import type { Lineset, LinesetInput, LinesetUpdate } from '../../shared/schemas/index.js'
+import type { Lineset, LinesetEventsPage, LinesetInput, LinesetUpdate } from '../../shared/schemas/index.js'
 import { api } from './client'
 
 export const linesetsApi = {
@@ -8,4 +8,7 @@ export const linesetsApi = {
   update: (id: string, body: LinesetUpdate) =>
     api.put<Lineset>(`/linesets/${encodeURIComponent(id)}`, body).then((r) => r.data),
   remove: (id: string) => api.delete(`/linesets/${encodeURIComponent(id)}`).then(() => undefined),
+  /** A page of the lineset's history, newest first; pass the previous page's `next` as `before`. */
+  events: (id: string, page: { limit?: number; before?: string } = {}) =>
+    api.get<LinesetEventsPage>(`/linesets/${encodeURIComponent(id)}/events`, { params: page }).then((r) => r.data),
 }

@@ -93,6 +93,8 @@ export function bodyFrom(draft: LinesetDraft, figures: ExactFigures, system: Uni
     pipeWeightPerLength: figure('pipeWeightPerLength'),
     pickPoints: draft.pickPoints.map((text) => figures.read(text, 'length', system)),
     notes: draft.notes,
+    // The server refuses figures typed in units the venue has since left.
+    unitSystem: system,
   }
 }
 

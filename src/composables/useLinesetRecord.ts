@@ -15,9 +15,14 @@ export function useLinesetRecord(id: () => string | undefined) {
   const saving = useAsyncTask()
   const removing = useAsyncTask()
 
+  /** Reads the lineset again; for a new one, starts the form again from blank. */
   async function read() {
     const current = id()
-    if (!current) return
+    if (!current) {
+      saving.error.value = null
+      reads.value += 1
+      return
+    }
     const found = await reading.run(() => store.loadOne(current))
     if (found) {
       lineset.value = found

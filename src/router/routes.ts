@@ -20,6 +20,13 @@ export const routes: RouteRecordRaw[] = [
     component: () => import('../views/SessionSignInView.vue'),
     meta: { public: true, title: 'Sign in' },
   },
+  {
+    path: '/invitation/:token',
+    name: 'invitation-accept',
+    component: () => import('../views/InvitationAcceptView.vue'),
+    props: true,
+    meta: { public: true, title: 'Invitation' },
+  },
   { path: '/', name: 'home', redirect: { name: 'linesets-list' } },
   {
     path: '/linesets',

@@ -1,9 +1,9 @@
 import { defineStore } from 'pinia'
 import { ref } from 'vue'
-import type { Person, PersonInput, PersonUpdate } from '../../shared/schemas/index.js'
+import type { Person, PersonUpdate } from '../../shared/schemas/index.js'
 import { peopleApi } from '../api/people'
 
-/** The members of the venue and their roles (administrators only). */
+/** The members of the venue and their roles (administrators only); new ones come by invitation. */
 export const usePeopleStore = defineStore('people', () => {
   const items = ref<Person[]>([])
   const loaded = ref(false)
@@ -20,7 +20,6 @@ export const usePeopleStore = defineStore('people', () => {
     loaded.value = true
   }
 
-  const add = async (body: PersonInput) => remember(await peopleApi.add(body))
   const update = async (id: string, body: PersonUpdate) => remember(await peopleApi.update(id, body))
 
   async function remove(id: string) {
@@ -28,5 +27,5 @@ export const usePeopleStore = defineStore('people', () => {
     items.value = items.value.filter((item) => item.id !== id)
   }
 
-  return { items, loaded, loadAll, add, update, remove }
+  return { items, loaded, loadAll, update, remove }
 })

@@ -14,6 +14,7 @@ export const useSessionStore = defineStore('session', () => {
   const canEdit = computed(() => canEditInventory(role.value))
   const canManage = computed(() => canManagePeople(role.value))
 
+  /** Takes a session answer (from signing in, or from accepting an invitation, which signs in too). */
   function accept(state: { user: SessionUser | null; csrfToken: string }) {
     user.value = state.user
     setCsrfToken(state.csrfToken)
@@ -47,5 +48,5 @@ export const useSessionStore = defineStore('session', () => {
     loaded.value = false
   }
 
-  return { user, loaded, signedIn, role, canEdit, canManage, load, signIn, signOut, clear }
+  return { user, loaded, signedIn, role, canEdit, canManage, load, signIn, signedInAs: accept, signOut, clear }
 })

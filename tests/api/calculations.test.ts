@@ -9,7 +9,7 @@ let flyOperator: Client
 
 beforeAll(async () => {
   app = await startTestApp()
-  const venue = await seedVenue(app.handle.db, 'alpha')
+  const venue = await seedVenue(app.handle.context, 'alpha')
   flyOperator = await signedIn(app.url, venue.emails['fly-operator'])
 })
 afterAll(() => app.stop())

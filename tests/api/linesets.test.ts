@@ -8,7 +8,7 @@ let admin: Client
 
 beforeAll(async () => {
   app = await startTestApp()
-  venue = await seedVenue(app.handle.db, 'alpha')
+  venue = await seedVenue(app.handle.context, 'alpha')
   admin = await signedIn(app.url, venue.emails.administrator)
 })
 afterAll(() => app.stop())

@@ -13,9 +13,9 @@ let gamma: VenueFixture
 
 beforeAll(async () => {
   app = await startTestApp({ env: BEHIND_A_PROXY })
-  alpha = await seedVenue(app.handle.db, 'alpha')
-  beta = await seedVenue(app.handle.db, 'beta')
-  gamma = await seedVenue(app.handle.db, 'gamma') // its accounts take the failures that fill an address
+  alpha = await seedVenue(app.handle.context, 'alpha')
+  beta = await seedVenue(app.handle.context, 'beta')
+  gamma = await seedVenue(app.handle.context, 'gamma') // its accounts take the failures that fill an address
 })
 afterAll(() => app.stop())
 

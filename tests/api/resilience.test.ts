@@ -14,7 +14,7 @@ describe('a session survives a server restart', () => {
 
   it('when the server stops and a new one starts on the same database, then the signed-in cookie still works', async () => {
     const first = await startTestApp({ databaseUrl })
-    venue = await seedVenue(first.handle.db, 'alpha')
+    venue = await seedVenue(first.handle.context, 'alpha')
     const client = await signedIn(first.url, venue.emails['stage-manager'])
     const cookie = (await client.get('/api/v1/session')).request.cookies
     await first.stop()
@@ -44,7 +44,7 @@ describe('a database outage', () => {
     const viaProxy = new URL(direct)
     viaProxy.port = String(proxy.port)
     app = await startTestApp({ databaseUrl: viaProxy.toString() })
-    const venue = await seedVenue(app.handle.db, 'alpha')
+    const venue = await seedVenue(app.handle.context, 'alpha')
     client = await signedIn(app.url, venue.emails['technical-director'])
   })
   afterAll(async () => {

@@ -66,6 +66,7 @@ const ROUTES: RouteCase[] = [
   },
   { method: 'get', path: () => '/api/v1/linesets', expected: all(200) },
   { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}`, expected: all(200) },
+  { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}/events`, expected: all(200) },
   {
     method: 'post',
     path: () => '/api/v1/linesets',
@@ -83,13 +84,28 @@ const ROUTES: RouteCase[] = [
   {
     method: 'post',
     path: () => '/api/v1/brick-types',
-    body: (_f, role) => ({ name: `Brick ${role}`, material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5 }),
+    body: (_f, role) => ({
+      name: `Brick ${role}`,
+      material: 'Steel',
+      unitWeight: 20,
+      thickness: 2,
+      quantityOwned: 5,
+      unitSystem: 'imperial',
+    }),
     expected: editors(201),
   },
   {
     method: 'put',
     path: (f) => `/api/v1/brick-types/${f.brickTypeId}`,
-    body: () => ({ name: 'Full', material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5, version: 999 }),
+    body: () => ({
+      name: 'Full',
+      material: 'Steel',
+      unitWeight: 20,
+      thickness: 2,
+      quantityOwned: 5,
+      unitSystem: 'imperial',
+      version: 999,
+    }),
     expected: editors(409),
   },
   { method: 'delete', path: () => '/api/v1/brick-types/00000000-0000-4000-8000-000000000000', expected: editors(404) },
@@ -101,9 +117,14 @@ const ROUTES: RouteCase[] = [
       email: `new-${role}@alpha.test`,
       name: 'New person',
       role: 'stage-manager',
-      password: 'a-long-password',
     }),
     expected: adminOnly(201),
+  },
+  { method: 'get', path: () => '/api/v1/invitations', expected: adminOnly(200) },
+  {
+    method: 'delete',
+    path: () => '/api/v1/invitations/00000000-0000-4000-8000-000000000000',
+    expected: adminOnly(404),
   },
   {
     method: 'put',
@@ -121,7 +142,7 @@ const clients = {} as Record<Role, Client>
 
 beforeAll(async () => {
   app = await startTestApp()
-  venue = await seedVenue(app.handle.db, 'alpha')
+  venue = await seedVenue(app.handle.context, 'alpha')
   for (const role of ROLES) clients[role] = await signedIn(app.url, venue.emails[role])
 })
 afterAll(() => app.stop())

@@ -10,7 +10,7 @@ let venue: VenueFixture
 
 beforeAll(async () => {
   app = await startTestApp()
-  venue = await seedVenue(app.handle.db, 'alpha')
+  venue = await seedVenue(app.handle.context, 'alpha')
 })
 afterAll(() => app.stop())
 

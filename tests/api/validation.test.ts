@@ -8,7 +8,7 @@ let td: Client
 
 beforeAll(async () => {
   app = await startTestApp()
-  venue = await seedVenue(app.handle.db, 'alpha')
+  venue = await seedVenue(app.handle.context, 'alpha')
   td = await signedIn(app.url, venue.emails['technical-director'])
 })
 afterAll(() => app.stop())
@@ -90,6 +90,7 @@ describe('validation errors change nothing', () => {
       unitWeight: 0,
       thickness: 2,
       quantityOwned: 2.5,
+      unitSystem: 'imperial',
     })
     expect(res.status).toBe(400)
     expect(res.body.error.fields).toEqual({

@@ -9,8 +9,8 @@ let alphaAdmin: Client
 
 beforeAll(async () => {
   app = await startTestApp()
-  alpha = await seedVenue(app.handle.db, 'alpha')
-  beta = await seedVenue(app.handle.db, 'beta')
+  alpha = await seedVenue(app.handle.context, 'alpha')
+  beta = await seedVenue(app.handle.context, 'beta')
   alphaAdmin = await signedIn(app.url, alpha.emails.administrator)
 })
 afterAll(() => app.stop())
@@ -28,6 +28,7 @@ describe('venue isolation', () => {
   it("when a member reaches for another venue's records by id, then every route answers 404 and nothing changes", async () => {
     const attempts = [
       alphaAdmin.get(`/api/v1/linesets/${beta.linesetId}`),
+      alphaAdmin.get(`/api/v1/linesets/${beta.linesetId}/events`),
       alphaAdmin.put(`/api/v1/linesets/${beta.linesetId}`, { ...sampleLineset(1, { name: 'Hijacked' }), version: 0 }),
       alphaAdmin.delete(`/api/v1/linesets/${beta.linesetId}`),
       alphaAdmin.put(`/api/v1/brick-types/${beta.brickTypeId}`, {
@@ -36,6 +37,7 @@ describe('venue isolation', () => {
         unitWeight: 1,
         thickness: 1,
         quantityOwned: 0,
+        unitSystem: 'imperial',
         version: 0,
       }),
       alphaAdmin.delete(`/api/v1/brick-types/${beta.brickTypeId}`),

@@ -22,6 +22,7 @@ const steel: BrickType = {
   thickness: 2,
   quantityOwned: 1400,
   version: 2,
+  unitSystem: 'imperial',
 }
 
 let wrapper: VueWrapper | undefined
@@ -68,6 +69,7 @@ describe('BrickTypesListView', () => {
       unitWeight: 19.5,
       thickness: 2,
       quantityOwned: 1380,
+      unitSystem: 'imperial',
       version: 2,
     })
   })

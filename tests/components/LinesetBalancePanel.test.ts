@@ -17,8 +17,26 @@ vi.mock('../../src/api/brick-types', () => ({
 }))
 
 const BRICKS: BrickType[] = [
-  { id: 'b1', name: 'Full steel', material: 'Steel', unitWeight: 19.5, thickness: 2, quantityOwned: 400, version: 1 },
-  { id: 'b2', name: 'Lead trim', material: 'Lead', unitWeight: 5, thickness: 0.5, quantityOwned: 40, version: 1 },
+  {
+    id: 'b1',
+    name: 'Full steel',
+    material: 'Steel',
+    unitWeight: 19.5,
+    thickness: 2,
+    quantityOwned: 400,
+    version: 1,
+    unitSystem: 'imperial',
+  },
+  {
+    id: 'b2',
+    name: 'Lead trim',
+    material: 'Lead',
+    unitWeight: 5,
+    thickness: 0.5,
+    quantityOwned: 40,
+    version: 1,
+    unitSystem: 'imperial',
+  },
 ]
 // A 40 ft batten of 2.72 lb/ft pipe on two lines set symmetrically: the pipe alone weighs 108.8 lb.
 const TWO_LINES = lineset({ pickPoints: [10, 30] })

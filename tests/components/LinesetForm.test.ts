@@ -144,6 +144,7 @@ describe('LinesetForm', () => {
       pipeSectionModulus: 5342.182864,
       arborCapacity: 635.029318,
       ratedLoad: 544.310844,
+      unitSystem: 'metric',
     }
     const w = mountForm({ initial: metricSet, unitSystem: 'metric' })
     const shown = (testid: string) => (input(w, testid).element as HTMLInputElement).value

@@ -47,5 +47,6 @@ export const lineset = (overrides: Partial<Lineset> = {}): Lineset => ({
   hoistRatedCapacity: null,
   hoistSpeed: null,
   notes: '',
+  unitSystem: 'imperial',
   ...overrides,
 })

@@ -22,7 +22,7 @@ export function demoInBrowser() {
     const clientDir = join(projectRoot, 'dist')
     await buildClientIfStale(clientDir)
     suite.app = await startTestApp({ env: { CLIENT_DIR: clientDir } })
-    await seedDemoIfEmpty(suite.app.handle.db)
+    await seedDemoIfEmpty(suite.app.handle.context)
     chromium = await launchChromium()
     suite.context = chromium.context
     mkdirSync(artifacts, { recursive: true })

@@ -2,13 +2,17 @@ import bcrypt from 'bcryptjs'
 import type { Role } from '../../shared/schemas/role.js'
 import { ROLES } from '../../shared/schemas/role.js'
 import { linesetInputSchema, type LinesetInput } from '../../shared/schemas/lineset.js'
-import { toSI } from '../../shared/units/systems.js'
-import type { Database } from '../../server/db/models.js'
-import { linesetFromApi } from '../../server/modules/linesets/lineset.mapper.js'
+import type { SessionUser } from '../../shared/schemas/session.js'
+import type { UnitSystem } from '../../shared/units/systems.js'
+import type { AppContext } from '../../server/context.js'
+import { createBrickType } from '../../server/modules/brick-types/brick-type.service.js'
+import { createLineset } from '../../server/modules/linesets/lineset.service.js'
+import { createAccount, joinVenue } from '../../server/modules/people/accounts.js'
+import { createVenue } from '../../server/modules/venues/venue.service.js'
 
 export const PASSWORD = 'correct-horse-battery'
 
-/** A plain single-purchase lineset body in imperial units (invented test data). */
+/** A plain single-purchase lineset body typed in imperial units (invented test data). */
 export const sampleLineset = (number: number, overrides: Partial<LinesetInput> = {}): LinesetInput => ({
   number,
   name: `Test set ${number}`,
@@ -27,56 +31,63 @@ export const sampleLineset = (number: number, overrides: Partial<LinesetInput> =
   ratedLoad: 1000,
   pipeWeight: 110,
   travel: 50,
+  unitSystem: 'imperial',
   ...overrides,
 })
 
 export interface VenueFixture {
   venueId: string
   emails: Record<Role, string>
+  members: Record<Role, SessionUser>
   linesetId: string
   brickTypeId: string
   membershipIds: Record<Role, string>
 }
 
-/** A venue with one member of each role, one lineset and one brick type. */
+// The same policies in either system: 10 lb and 50 lb (NIST SP 811: 1 lb = 0.45359237 kg).
+const POLICIES: Record<UnitSystem, { balanceTolerance: number; ropeLockHolding: number }> = {
+  imperial: { balanceTolerance: 10, ropeLockHolding: 50 },
+  metric: { balanceTolerance: 4.5359237, ropeLockHolding: 22.6796185 },
+}
+
+/**
+ * A venue with one member of each role, one lineset (the sample's figures read in the venue's units) and
+ * one brick type, made through the services as its administrator, so the ledger holds what it would.
+ */
 export async function seedVenue(
-  db: Database,
+  app: AppContext,
   key: string,
-  unitSystem: 'imperial' | 'metric' = 'imperial',
+  unitSystem: UnitSystem = 'imperial',
 ): Promise<VenueFixture> {
   const passwordHash = await bcrypt.hash(PASSWORD, 4) // low cost: test speed only
-  return db.sequelize.transaction(async (transaction) => {
-    const venue = await db.models.Venue.create(
-      {
-        name: `Venue ${key}`,
-        unitSystem,
-        balanceTolerance: toSI(10, 'weight', 'imperial').toString(),
-        ropeLockHolding: toSI(50, 'weight', 'imperial').toString(),
-        wireRopeDesignFactor: '8',
-      },
-      { transaction },
-    )
+  return app.db.sequelize.transaction(async (transaction) => {
+    const setup = { ...app, actor: null, transaction }
+    const venue = await createVenue(setup, {
+      name: `Venue ${key}`,
+      unitSystem,
+      wireRopeDesignFactor: 8,
+      ...POLICIES[unitSystem],
+    })
     const emails = {} as Record<Role, string>
+    const members = {} as Record<Role, SessionUser>
     const membershipIds = {} as Record<Role, string>
     for (const role of ROLES) {
       const email = `${role}@${key}.test`
-      const user = await db.models.User.create({ email, name: `${role} of ${key}`, passwordHash }, { transaction })
-      const membership = await db.models.Membership.create(
-        { userId: user.id, venueId: venue.id, role },
-        { transaction },
-      )
+      const user = await createAccount(setup, { email, name: `${role} of ${key}`, passwordHash })
+      const membership = await joinVenue(setup, { userId: user.id, venueId: venue.id, role })
       emails[role] = email
+      members[role] = { id: user.id, email, name: user.name, role, venueId: venue.id }
       membershipIds[role] = membership.id
     }
-    const body = linesetInputSchema.parse(sampleLineset(1))
-    const lineset = await db.models.Lineset.create(
-      { ...linesetFromApi(body, unitSystem), venueId: venue.id, retiredAt: null },
-      { transaction },
-    )
-    const brick = await db.models.BrickType.create(
-      { venueId: venue.id, name: 'Full', material: 'Steel', unitWeight: '9', thickness: '0.05', quantityOwned: 100 },
-      { transaction },
-    )
-    return { venueId: venue.id, emails, membershipIds, linesetId: lineset.id, brickTypeId: brick.id }
+    const asAdministrator = { ...app, actor: members.administrator, transaction }
+    const lineset = await createLineset(asAdministrator, linesetInputSchema.parse({ ...sampleLineset(1), unitSystem }))
+    const brick = await createBrickType(asAdministrator, {
+      name: 'Full',
+      material: 'Steel',
+      ...(unitSystem === 'imperial' ? { unitWeight: 20, thickness: 2 } : { unitWeight: 9, thickness: 50 }),
+      quantityOwned: 100,
+      unitSystem,
+    })
+    return { venueId: venue.id, emails, members, membershipIds, linesetId: lineset.id, brickTypeId: brick.id }
   })
 }

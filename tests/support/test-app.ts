@@ -1,28 +1,47 @@
+import { mkdtempSync, rmSync } from 'node:fs'
+import { tmpdir } from 'node:os'
+import { join } from 'node:path'
 import request from 'supertest'
+import type { AppOverrides } from '../../server/app-context.js'
 import { loadConfig, type Config } from '../../server/config.js'
 import { startServer, type RunningServer } from '../../server/index.js'
 import { createTestDatabase } from './database.js'
 import { PASSWORD } from './fixtures.js'
+import { Mailbox } from './mailbox.js'
 
 export interface TestApp extends RunningServer {
   databaseUrl: string
   config: Config
+  /** What the app mailed, through a real SMTP sink of its own. */
+  mailbox: Mailbox
 }
 
-/** Starts the real server on a free port against a database of its own (or the one given). */
+/**
+ * Starts the real server on a free port against a database of its own (or the one given), with its own SMTP
+ * sink and a temporary file-storage folder; `overrides` replace parts of the application context.
+ */
 export async function startTestApp(
-  options: { databaseUrl?: string; env?: Record<string, string> } = {},
+  options: { databaseUrl?: string; env?: Record<string, string>; overrides?: AppOverrides } = {},
 ): Promise<TestApp> {
   const databaseUrl = options.databaseUrl ?? (await createTestDatabase())
+  const mailbox = await Mailbox.open()
+  const files = mkdtempSync(join(tmpdir(), 'loftledger-files-'))
   const config = loadConfig({
     NODE_ENV: 'test',
     PORT: '0',
     DATABASE_URL: databaseUrl,
     SESSION_SECRET: 'test-secret-test-secret-test-secret-0123',
+    SMTP_URL: mailbox.url,
+    FILE_STORAGE_DIR: files,
     ...options.env,
   })
-  const running = await startServer(config)
-  return { ...running, databaseUrl, config }
+  const running = await startServer(config, options.overrides)
+  const stop = async () => {
+    await running.stop()
+    await mailbox.close()
+    rmSync(files, { recursive: true, force: true })
+  }
+  return { ...running, stop, databaseUrl, config, mailbox }
 }
 
 /** A cookie-keeping client that sends the session's CSRF token on every unsafe request. */

@@ -1,4 +1,5 @@
 import foundation from './0001-foundation.js'
+import venueBoundTicketsRetiredBricksInvitations from './0002-venue-bound-tickets-retired-bricks-invitations.js'
 
 export interface Migration {
   name: string
@@ -8,4 +9,4 @@ export interface Migration {
 }
 
 /** Every migration, in order. A new one is a new file here, appended to this list; never edit a landed one. */
-export const migrations: Migration[] = [foundation]
+export const migrations: Migration[] = [foundation, venueBoundTicketsRetiredBricksInvitations]

@@ -1,3 +1,4 @@
+import type { BrickTypeInput } from '../../../shared/schemas/brick-type.js'
 import type { LinesetInput, LinesetKind } from '../../../shared/schemas/lineset.js'
 
 // An invented house, the Fennwick Street Playhouse: a 48 ft batten on five lift lines 10 ft apart
@@ -69,7 +70,7 @@ const HOUSE: Plan[] = [
 function figuresFor(plan: Plan, index: number): Omit<LinesetInput, 'number' | 'name' | 'status'> {
   const kind = plan.kind ?? 'counterweight-single'
   const distanceFromPlasterLine = Math.round((1.5 + index * 0.75) * 100) / 100
-  const base = { kind, distanceFromPlasterLine, notes: plan.notes ?? '', ...LIFT_LINE }
+  const base = { kind, distanceFromPlasterLine, notes: plan.notes ?? '', unitSystem: 'imperial' as const, ...LIFT_LINE }
   switch (kind) {
     case 'counterweight-single':
       return {
@@ -142,8 +143,8 @@ export const DEMO_LINESETS: LinesetInput[] = HOUSE.map((plan, index) => ({
   ...figuresFor(plan, index),
 }))
 
-export const DEMO_BRICK_TYPES = [
+export const DEMO_BRICK_TYPES: BrickTypeInput[] = [
   { name: 'Full steel brick', material: 'Steel', unitWeight: 19.5, thickness: 2, quantityOwned: 1400 },
   { name: 'Half steel brick', material: 'Steel', unitWeight: 9.75, thickness: 1, quantityOwned: 420 },
   { name: 'Lead trim brick', material: 'Lead', unitWeight: 5, thickness: 0.5, quantityOwned: 60 },
-]
+].map((brick) => ({ ...brick, unitSystem: 'imperial' }))

@@ -1,53 +1,44 @@
 import bcrypt from 'bcryptjs'
+import { brickTypeInputSchema } from '../../../shared/schemas/brick-type.js'
 import { linesetInputSchema } from '../../../shared/schemas/lineset.js'
-import { toSI } from '../../../shared/units/systems.js'
-import { linesetFromApi } from '../../modules/linesets/lineset.mapper.js'
-import type { Database } from '../models.js'
+import type { SessionUser } from '../../../shared/schemas/session.js'
+import type { AppContext } from '../../context.js'
+import { createBrickType } from '../../modules/brick-types/brick-type.service.js'
+import { createLineset } from '../../modules/linesets/lineset.service.js'
+import { createAccount, joinVenue, PASSWORD_HASH_ROUNDS } from '../../modules/people/accounts.js'
+import { createVenue } from '../../modules/venues/venue.service.js'
 import { DEMO_BRICK_TYPES, DEMO_LINESETS } from './demo-linesets.js'
 import { DEMO_PASSWORD, DEMO_PEOPLE } from './demo-people.js'
 
 export const DEMO_VENUE_NAME = 'Fennwick Street Playhouse'
 
-/** Seeds the invented demo venue, in one transaction, when the database has no venue yet. */
-export async function seedDemoIfEmpty(db: Database): Promise<boolean> {
-  if ((await db.models.Venue.count()) > 0) return false
-  const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 12)
-  await db.sequelize.transaction(async (transaction) => {
-    const venue = await db.models.Venue.create(
-      {
-        name: DEMO_VENUE_NAME,
-        unitSystem: 'imperial',
-        balanceTolerance: toSI(10, 'weight', 'imperial').toString(),
-        ropeLockHolding: toSI(50, 'weight', 'imperial').toString(),
-        wireRopeDesignFactor: '8',
-      },
-      { transaction },
-    )
+/**
+ * Seeds the invented demo venue, in one transaction, when the database has no venue yet. Linesets and
+ * bricks go through the services, as its administrator, so each lineset has its ledger entry like any other.
+ */
+export async function seedDemoIfEmpty(app: AppContext): Promise<boolean> {
+  if ((await app.db.models.Venue.count()) > 0) return false
+  const passwordHash = await bcrypt.hash(DEMO_PASSWORD, PASSWORD_HASH_ROUNDS)
+  await app.db.sequelize.transaction(async (transaction) => {
+    const setup = { ...app, actor: null, transaction }
+    const venue = await createVenue(setup, {
+      name: DEMO_VENUE_NAME,
+      unitSystem: 'imperial',
+      balanceTolerance: 10,
+      ropeLockHolding: 50,
+      wireRopeDesignFactor: 8,
+    })
+    let administrator: SessionUser | undefined
     for (const person of DEMO_PEOPLE) {
-      const user = await db.models.User.create(
-        { email: person.email, name: person.name, passwordHash },
-        { transaction },
-      )
-      await db.models.Membership.create({ userId: user.id, venueId: venue.id, role: person.role }, { transaction })
+      const user = await createAccount(setup, { email: person.email, name: person.name, passwordHash })
+      await joinVenue(setup, { userId: user.id, venueId: venue.id, role: person.role })
+      if (person.role === 'administrator')
+        administrator ??= { id: user.id, email: user.email, name: user.name, role: person.role, venueId: venue.id }
     }
-    for (const lineset of DEMO_LINESETS) {
-      const valid = linesetInputSchema.parse(lineset) // demo data obeys the same contract as the form
-      await db.models.Lineset.create(
-        { ...linesetFromApi(valid, 'imperial'), venueId: venue.id, retiredAt: null },
-        { transaction },
-      )
-    }
-    for (const brick of DEMO_BRICK_TYPES) {
-      await db.models.BrickType.create(
-        {
-          ...brick,
-          venueId: venue.id,
-          unitWeight: toSI(brick.unitWeight, 'weight', 'imperial').toString(),
-          thickness: toSI(brick.thickness, 'shortLength', 'imperial').toString(),
-        },
-        { transaction },
-      )
-    }
+    const asAdministrator = { ...app, actor: administrator!, transaction }
+    // Demo data obeys the same contract as the forms.
+    for (const lineset of DEMO_LINESETS) await createLineset(asAdministrator, linesetInputSchema.parse(lineset))
+    for (const brick of DEMO_BRICK_TYPES) await createBrickType(asAdministrator, brickTypeInputSchema.parse(brick))
   })
   return true
 }

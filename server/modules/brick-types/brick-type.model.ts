@@ -18,6 +18,8 @@ export function defineBrickTypeModel(sequelize: Sequelize) {
     declare unitWeight: string
     declare thickness: string
     declare quantityOwned: number
+    /** Set once the type is taken out of the lists; a type something refers to is retired, never deleted. */
+    declare retiredAt: Date | null
     declare version: CreationOptional<number>
     declare createdAt: CreationOptional<Date>
     declare updatedAt: CreationOptional<Date>
@@ -31,6 +33,7 @@ export function defineBrickTypeModel(sequelize: Sequelize) {
       unitWeight: requiredDecimal(),
       thickness: requiredDecimal(),
       quantityOwned: { type: DataTypes.INTEGER, allowNull: false },
+      retiredAt: { type: DataTypes.DATE, allowNull: true },
       ...lockVersion(),
       ...timestamps(),
     },

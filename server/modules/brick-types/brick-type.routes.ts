@@ -2,19 +2,19 @@ import { Router } from 'express'
 import { brickTypeInputSchema, brickTypeUpdateSchema } from '../../../shared/schemas/brick-type.js'
 import { idParamsSchema } from '../../../shared/schemas/id.js'
 import { INVENTORY_EDITORS, ROLES } from '../../../shared/schemas/role.js'
-import type { Database } from '../../db/models.js'
-import { currentUser, requireRole } from '../../http/auth.js'
+import { memberContext, type AppContext } from '../../context.js'
+import { requireRole } from '../../http/auth.js'
 import { validate } from '../../http/validate.js'
 import * as brickTypes from './brick-type.service.js'
 
-export function brickTypeRoutes(db: Database) {
+export function brickTypeRoutes(app: AppContext) {
   const router = Router()
   const byId = validate({ params: idParamsSchema })
   router.get('/', requireRole(ROLES), async (req, res) => {
-    res.json(await brickTypes.listBrickTypes(db, currentUser(req)))
+    res.json(await brickTypes.listBrickTypes(memberContext(app, req)))
   })
   router.post('/', requireRole(INVENTORY_EDITORS), validate({ body: brickTypeInputSchema }), async (req, res) => {
-    res.status(201).json(await brickTypes.createBrickType(db, currentUser(req), req.body))
+    res.status(201).json(await brickTypes.createBrickType(memberContext(app, req), req.body))
   })
   router.put(
     '/:id',
@@ -22,11 +22,11 @@ export function brickTypeRoutes(db: Database) {
     byId,
     validate({ body: brickTypeUpdateSchema }),
     async (req, res) => {
-      res.json(await brickTypes.updateBrickType(db, currentUser(req), req.params.id as string, req.body))
+      res.json(await brickTypes.updateBrickType(memberContext(app, req), req.params.id as string, req.body))
     },
   )
   router.delete('/:id', requireRole(INVENTORY_EDITORS), byId, async (req, res) => {
-    await brickTypes.deleteBrickType(db, currentUser(req), req.params.id as string)
+    await brickTypes.deleteBrickType(memberContext(app, req), req.params.id as string)
     res.status(204).end()
   })
   return router

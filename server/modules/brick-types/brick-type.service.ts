@@ -1,9 +1,9 @@
 import type { BrickType, BrickTypeInput, BrickTypeUpdate } from '../../../shared/schemas/brick-type.js'
-import type { SessionUser } from '../../../shared/schemas/session.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
-import type { Database } from '../../db/models.js'
+import { inTransaction, type ServiceContext, type TransactionContext } from '../../context.js'
 import { apiFromStored, storedFromApi } from '../../db/quantities.js'
 import { AppError, notFound, staleVersion } from '../../http/errors.js'
+import { unitsTypedIn } from '../venues/units.js'
 import { venueUnitSystem } from '../venues/venue.service.js'
 import type { BrickTypeModel } from './brick-type.model.js'
 
@@ -16,10 +16,11 @@ function toApi(row: BrickTypeModel, system: UnitSystem): BrickType {
     unitWeight: apiFromStored(row.unitWeight, 'weight', system)!,
     thickness: apiFromStored(row.thickness, 'shortLength', system)!,
     quantityOwned: row.quantityOwned,
+    unitSystem: system,
   }
 }
 
-function fromApi(body: BrickTypeInput, system: UnitSystem) {
+function fromApi(body: Omit<BrickTypeInput, 'unitSystem'>, system: UnitSystem) {
   return {
     name: body.name,
     material: body.material,
@@ -29,44 +30,93 @@ function fromApi(body: BrickTypeInput, system: UnitSystem) {
   }
 }
 
-export async function listBrickTypes(db: Database, actor: SessionUser): Promise<BrickType[]> {
-  const system = await venueUnitSystem(db, actor.venueId)
-  const rows = await db.models.BrickType.findAll({ where: { venueId: actor.venueId }, order: [['name', 'ASC']] })
+const active = (venueId: string) => ({ venueId, retiredAt: null })
+
+/** The brick types in use, by name; retired ones are history only. */
+export async function listBrickTypes(ctx: ServiceContext): Promise<BrickType[]> {
+  const system = await venueUnitSystem(ctx)
+  const rows = await ctx.db.models.BrickType.findAll({
+    where: active(ctx.actor.venueId),
+    order: [['name', 'ASC']],
+    transaction: ctx.transaction,
+  })
   return rows.map((row) => toApi(row, system))
 }
 
-async function refuseTakenName(db: Database, actor: SessionUser, name: string, exceptId?: string) {
-  const clash = await db.models.BrickType.findOne({ where: { venueId: actor.venueId, name }, attributes: ['id'] })
+async function refuseTakenName(tx: TransactionContext, name: string, exceptId?: string) {
+  const clash = await tx.db.models.BrickType.findOne({
+    where: { ...active(tx.actor.venueId), name },
+    attributes: ['id'],
+    transaction: tx.transaction,
+  })
   if (clash && clash.id !== exceptId)
     throw new AppError(409, 'duplicate', `A brick type named "${name}" already exists`, { name: 'Already in use' })
 }
 
-export async function createBrickType(db: Database, actor: SessionUser, body: BrickTypeInput): Promise<BrickType> {
-  const system = await venueUnitSystem(db, actor.venueId)
-  await refuseTakenName(db, actor, body.name)
-  const row = await db.models.BrickType.create({ ...fromApi(body, system), venueId: actor.venueId })
-  return toApi(row, system)
+export function createBrickType(ctx: ServiceContext, body: BrickTypeInput): Promise<BrickType> {
+  return inTransaction(ctx, async (tx) => {
+    const system = await unitsTypedIn(tx, body.unitSystem)
+    await refuseTakenName(tx, body.name)
+    const row = await tx.db.models.BrickType.create(
+      { ...fromApi(body, system), venueId: tx.actor.venueId, retiredAt: null },
+      { transaction: tx.transaction },
+    )
+    return toApi(row, system)
+  })
 }
 
-export async function updateBrickType(
-  db: Database,
-  actor: SessionUser,
-  id: string,
-  body: BrickTypeUpdate,
-): Promise<BrickType> {
-  const system = await venueUnitSystem(db, actor.venueId)
-  const { version, ...fields } = body
-  if (!(await db.models.BrickType.count({ where: { id, venueId: actor.venueId } }))) throw notFound('That brick type')
-  await refuseTakenName(db, actor, body.name, id)
-  const [count] = await db.models.BrickType.update(
-    { ...fromApi(fields, system), version: version + 1 },
-    { where: { id, venueId: actor.venueId, version } },
-  )
-  if (count === 0) throw staleVersion(`Brick type "${body.name}"`)
-  return toApi((await db.models.BrickType.findByPk(id))!, system)
+async function refuseUnknown(tx: TransactionContext, id: string) {
+  const found = await tx.db.models.BrickType.count({
+    where: { id, ...active(tx.actor.venueId) },
+    transaction: tx.transaction,
+  })
+  if (!found) throw notFound('That brick type')
 }
 
-export async function deleteBrickType(db: Database, actor: SessionUser, id: string): Promise<void> {
-  const count = await db.models.BrickType.destroy({ where: { id, venueId: actor.venueId } })
-  if (count === 0) throw notFound('That brick type')
+/** Saves a brick type if nobody changed it since `version` was read (else 409). Answers from the row written. */
+export function updateBrickType(ctx: ServiceContext, id: string, body: BrickTypeUpdate): Promise<BrickType> {
+  return inTransaction(ctx, async (tx) => {
+    const system = await unitsTypedIn(tx, body.unitSystem)
+    await refuseUnknown(tx, id)
+    await refuseTakenName(tx, body.name, id)
+    const { version, unitSystem: _typedIn, ...fields } = body
+    const [count, rows] = await tx.db.models.BrickType.update(
+      { ...fromApi(fields, system), version: version + 1 },
+      { where: { id, version, ...active(tx.actor.venueId) }, transaction: tx.transaction, returning: true },
+    )
+    if (count === 0) {
+      await refuseUnknown(tx, id) // retired meanwhile: 404; otherwise someone saved first
+      throw staleVersion(`Brick type "${body.name}"`)
+    }
+    return toApi(rows[0]!, system)
+  })
+}
+
+const isForeignKeyViolation = (error: unknown) =>
+  (error as { name?: string })?.name === 'SequelizeForeignKeyConstraintError'
+
+/**
+ * Deletes a brick type nothing refers to, and retires one that anything refers to (a lineset, a ticket:
+ * every table that names a brick type references it with ON DELETE RESTRICT, so the database says which).
+ * Both are conditional on the type still being in the lists: of two at once, one answers 404.
+ */
+export function deleteBrickType(ctx: ServiceContext, id: string): Promise<void> {
+  return inTransaction(ctx, async (tx) => {
+    const { db, transaction } = tx
+    const where = { id, ...active(tx.actor.venueId) }
+    try {
+      // A savepoint, so a refusal leaves the outer transaction usable for the retirement.
+      const deleted = await db.sequelize.transaction({ transaction }, (savepoint) =>
+        db.models.BrickType.destroy({ where, transaction: savepoint }),
+      )
+      if (deleted === 0) throw notFound('That brick type')
+    } catch (error) {
+      if (!isForeignKeyViolation(error)) throw error
+      const [retired] = await db.models.BrickType.update(
+        { retiredAt: tx.clock.now(), version: db.sequelize.literal('version + 1') },
+        { where, transaction },
+      )
+      if (retired === 0) throw notFound('That brick type')
+    }
+  })
 }

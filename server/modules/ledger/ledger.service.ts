@@ -1,15 +1,19 @@
-import type { Transaction } from 'sequelize'
-import type { Database } from '../../db/models.js'
+import type { SessionUser } from '../../../shared/schemas/session.js'
+import type { TransactionContext } from '../../context.js'
 
 export interface LedgerEntry {
   venueId: string
   linesetId: string
   actorId: string | null
   eventType: string
+  /** Quantities as SI decimal strings, like every table. */
   payload?: Record<string, unknown>
 }
 
 /** Appends to a lineset's ledger inside the caller's transaction, so the change and its record land together. */
-export async function appendLinesetEvent(db: Database, entry: LedgerEntry, transaction: Transaction) {
-  await db.models.LinesetEvent.create({ ...entry, payload: entry.payload ?? {} }, { transaction })
+export async function appendLinesetEvent(tx: TransactionContext<SessionUser | null>, entry: LedgerEntry) {
+  await tx.db.models.LinesetEvent.create(
+    { ...entry, occurredAt: tx.clock.now(), payload: entry.payload ?? {} },
+    { transaction: tx.transaction },
+  )
 }

@@ -4,9 +4,11 @@ import {
   type CreationOptional,
   type InferAttributes,
   type InferCreationAttributes,
+  type NonAttribute,
   type Sequelize,
 } from 'sequelize'
 import { requiredText, requiredUuid, optionalUuid } from '../../db/columns.js'
+import type { UserModel } from '../people/user.model.js'
 
 /** One entry in a lineset's append-only ledger (the database refuses updates and deletes). */
 export function defineLinesetEventModel(sequelize: Sequelize) {
@@ -21,6 +23,7 @@ export function defineLinesetEventModel(sequelize: Sequelize) {
     declare actorId: string | null
     declare eventType: string
     declare payload: Record<string, unknown>
+    declare actor?: NonAttribute<UserModel>
   }
   LinesetEventModel.init(
     {

@@ -7,27 +7,55 @@ const LINESET_QUANTITIES = LINESET_FIGURE_QUANTITIES
 
 type QuantityField = keyof typeof LINESET_QUANTITIES
 
+/** A lineset's own fields as stored: text as typed, every figure an SI decimal string (pick points too). */
+export type StoredLineset = ReturnType<typeof linesetFromApi>
+
+/** The stored fields a ledger entry keeps, in the order the table has them. */
+const STORED_FIELDS = [
+  'number',
+  'name',
+  'kind',
+  'status',
+  ...Object.keys(LINESET_QUANTITIES),
+  'pipeSize',
+  'pickPoints',
+  'notes',
+] as (keyof StoredLineset)[]
+
+/** The API's figures (the venue's units) from stored SI ones. */
+export function storedToApi(stored: StoredLineset, system: UnitSystem): Omit<Lineset, 'id' | 'version' | 'updatedAt'> {
+  const figures = toApiFields(LINESET_QUANTITIES, stored as unknown as Record<QuantityField, string | null>, system)
+  return {
+    number: stored.number,
+    name: stored.name,
+    kind: stored.kind,
+    status: stored.status,
+    pipeSize: stored.pipeSize,
+    notes: stored.notes,
+    ...figures,
+    battenLength: figures.battenLength!,
+    pipeWeightPerLength: figures.pipeWeightPerLength!,
+    pickPoints: stored.pickPoints.map((at) => apiFromStored(at, 'length', system)!),
+    unitSystem: system,
+  }
+}
+
+/** The stored fields of a row, as the ledger keeps them. */
+export function storedFromRow(row: LinesetModel): StoredLineset {
+  return Object.fromEntries(STORED_FIELDS.map((field) => [field, row.get(field)])) as StoredLineset
+}
+
 export function linesetToApi(row: LinesetModel, system: UnitSystem): Lineset {
-  const figures = toApiFields(LINESET_QUANTITIES, row as unknown as Record<QuantityField, string | null>, system)
   return {
     id: row.id,
     version: row.version,
     updatedAt: row.updatedAt.toISOString(),
-    number: row.number,
-    name: row.name,
-    kind: row.kind,
-    status: row.status,
-    pipeSize: row.pipeSize,
-    notes: row.notes,
-    ...figures,
-    battenLength: figures.battenLength!,
-    pipeWeightPerLength: figures.pipeWeightPerLength!,
-    pickPoints: row.pickPoints.map((at) => apiFromStored(at, 'length', system)!),
+    ...storedToApi(storedFromRow(row), system),
   }
 }
 
-/** The stored attributes for a lineset body in the venue's units. */
-export function linesetFromApi(body: LinesetInput, system: UnitSystem) {
+/** The stored attributes for a lineset body typed in the venue's units. */
+export function linesetFromApi(body: Omit<LinesetInput, 'unitSystem'>, system: UnitSystem) {
   const figures = toStoredFields(LINESET_QUANTITIES, body, system)
   return {
     number: body.number,
@@ -41,4 +69,9 @@ export function linesetFromApi(body: LinesetInput, system: UnitSystem) {
     pipeWeightPerLength: figures.pipeWeightPerLength!,
     pickPoints: body.pickPoints.map((at) => storedFromApi(at, 'length', system)!),
   }
+}
+
+/** The stored fields that differ between two versions of a row, in table order. */
+export function changedFields(before: StoredLineset, after: StoredLineset): (keyof StoredLineset)[] {
+  return STORED_FIELDS.filter((field) => JSON.stringify(before[field]) !== JSON.stringify(after[field]))
 }

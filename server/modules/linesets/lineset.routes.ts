@@ -1,23 +1,40 @@
 import { Router } from 'express'
 import { idParamsSchema } from '../../../shared/schemas/id.js'
+import { linesetEventsQuerySchema, type LinesetEventsQuery } from '../../../shared/schemas/lineset-event.js'
 import { linesetInputSchema, linesetUpdateSchema } from '../../../shared/schemas/lineset.js'
 import { INVENTORY_EDITORS, ROLES } from '../../../shared/schemas/role.js'
-import type { Database } from '../../db/models.js'
-import { currentUser, requireRole } from '../../http/auth.js'
+import { memberContext, type AppContext } from '../../context.js'
+import { requireRole } from '../../http/auth.js'
 import { validate } from '../../http/validate.js'
+import { listLinesetEvents } from './lineset-events.service.js'
 import * as linesets from './lineset.service.js'
 
-export function linesetRoutes(db: Database) {
+export function linesetRoutes(app: AppContext) {
   const router = Router()
   const byId = validate({ params: idParamsSchema })
   router.get('/', requireRole(ROLES), async (req, res) => {
-    res.json(await linesets.listLinesets(db, currentUser(req)))
+    res.json(await linesets.listLinesets(memberContext(app, req)))
   })
   router.get('/:id', requireRole(ROLES), byId, async (req, res) => {
-    res.json(await linesets.getLineset(db, currentUser(req), req.params.id as string))
+    res.json(await linesets.getLineset(memberContext(app, req), req.params.id as string))
   })
+  router.get(
+    '/:id/events',
+    requireRole(ROLES),
+    byId,
+    validate({ query: linesetEventsQuerySchema }),
+    async (req, res) => {
+      res.json(
+        await listLinesetEvents(
+          memberContext(app, req),
+          req.params.id as string,
+          req.query as unknown as LinesetEventsQuery,
+        ),
+      )
+    },
+  )
   router.post('/', requireRole(INVENTORY_EDITORS), validate({ body: linesetInputSchema }), async (req, res) => {
-    res.status(201).json(await linesets.createLineset(db, currentUser(req), req.body))
+    res.status(201).json(await linesets.createLineset(memberContext(app, req), req.body))
   })
   router.put(
     '/:id',
@@ -25,11 +42,11 @@ export function linesetRoutes(db: Database) {
     byId,
     validate({ body: linesetUpdateSchema }),
     async (req, res) => {
-      res.json(await linesets.updateLineset(db, currentUser(req), req.params.id as string, req.body))
+      res.json(await linesets.updateLineset(memberContext(app, req), req.params.id as string, req.body))
     },
   )
   router.delete('/:id', requireRole(['administrator']), byId, async (req, res) => {
-    await linesets.retireLineset(db, currentUser(req), req.params.id as string)
+    await linesets.retireLineset(memberContext(app, req), req.params.id as string)
     res.status(204).end()
   })
   return router

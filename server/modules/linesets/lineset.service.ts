@@ -1,102 +1,102 @@
 import type { Lineset, LinesetInput, LinesetUpdate } from '../../../shared/schemas/lineset.js'
-import type { SessionUser } from '../../../shared/schemas/session.js'
-import type { Database } from '../../db/models.js'
+import { inTransaction, type ServiceContext, type TransactionContext } from '../../context.js'
 import { AppError, notFound, staleVersion } from '../../http/errors.js'
-import { appendLinesetEvent } from '../ledger/ledger.service.js'
+import { unitsTypedIn } from '../venues/units.js'
 import { venueUnitSystem } from '../venues/venue.service.js'
-import { linesetFromApi, linesetToApi } from './lineset.mapper.js'
+import { recordLinesetChange } from './lineset-history.js'
+import { changedFields, linesetFromApi, linesetToApi, storedFromRow } from './lineset.mapper.js'
 
 const active = (venueId: string) => ({ venueId, retiredAt: null })
 
 /** Every lineset in service or not, in number order; retired ones are history only. */
-export async function listLinesets(db: Database, actor: SessionUser): Promise<Lineset[]> {
-  const system = await venueUnitSystem(db, actor.venueId)
-  const rows = await db.models.Lineset.findAll({ where: active(actor.venueId), order: [['number', 'ASC']] })
+export async function listLinesets(ctx: ServiceContext): Promise<Lineset[]> {
+  const system = await venueUnitSystem(ctx)
+  const rows = await ctx.db.models.Lineset.findAll({
+    where: active(ctx.actor.venueId),
+    order: [['number', 'ASC']],
+    transaction: ctx.transaction,
+  })
   return rows.map((row) => linesetToApi(row, system))
 }
 
-async function findOwn(db: Database, actor: SessionUser, id: string) {
-  const row = await db.models.Lineset.findOne({ where: { id, ...active(actor.venueId) } })
+async function findOwn(ctx: ServiceContext, id: string) {
+  const row = await ctx.db.models.Lineset.findOne({
+    where: { id, ...active(ctx.actor.venueId) },
+    transaction: ctx.transaction,
+  })
   if (!row) throw notFound('That lineset')
   return row
 }
 
-export async function getLineset(db: Database, actor: SessionUser, id: string): Promise<Lineset> {
-  const system = await venueUnitSystem(db, actor.venueId)
-  return linesetToApi(await findOwn(db, actor, id), system)
+export async function getLineset(ctx: ServiceContext, id: string): Promise<Lineset> {
+  const system = await venueUnitSystem(ctx)
+  return linesetToApi(await findOwn(ctx, id), system)
 }
 
-async function refuseTakenNumber(db: Database, actor: SessionUser, number: number, exceptId?: string) {
-  const clash = await db.models.Lineset.findOne({ where: { ...active(actor.venueId), number }, attributes: ['id'] })
+async function refuseTakenNumber(tx: TransactionContext, number: number, exceptId?: string) {
+  const clash = await tx.db.models.Lineset.findOne({
+    where: { ...active(tx.actor.venueId), number },
+    attributes: ['id'],
+    transaction: tx.transaction,
+  })
   if (clash && clash.id !== exceptId)
     throw new AppError(409, 'duplicate', `Lineset number ${number} is already in use`, { number: 'Already in use' })
 }
 
-export async function createLineset(db: Database, actor: SessionUser, body: LinesetInput): Promise<Lineset> {
-  const system = await venueUnitSystem(db, actor.venueId)
-  await refuseTakenNumber(db, actor, body.number)
-  const row = await db.sequelize.transaction(async (transaction) => {
-    const created = await db.models.Lineset.create(
-      { ...linesetFromApi(body, system), venueId: actor.venueId, retiredAt: null },
-      { transaction },
+/** Adds a lineset and its first ledger entry. Answers from the row written. */
+export function createLineset(ctx: ServiceContext, body: LinesetInput): Promise<Lineset> {
+  return inTransaction(ctx, async (tx) => {
+    const system = await unitsTypedIn(tx, body.unitSystem)
+    await refuseTakenNumber(tx, body.number)
+    const { unitSystem: _typedIn, ...fields } = body
+    const row = await tx.db.models.Lineset.create(
+      { ...linesetFromApi(fields, system), venueId: tx.actor.venueId, retiredAt: null },
+      { transaction: tx.transaction },
     )
-    await appendLinesetEvent(
-      db,
-      {
-        venueId: actor.venueId,
-        linesetId: created.id,
-        actorId: actor.id,
-        eventType: 'lineset-added',
-        payload: { unitSystem: system, lineset: body },
-      },
-      transaction,
-    )
-    return created
+    await recordLinesetChange(tx, 'lineset-added', row.id, { lineset: storedFromRow(row) })
+    return linesetToApi(row, system)
   })
-  return linesetToApi(row, system)
 }
 
-/** Saves a whole lineset if nobody changed it since `version` was read; a stale version is a 409, never an overwrite. */
-export async function updateLineset(
-  db: Database,
-  actor: SessionUser,
-  id: string,
-  body: LinesetUpdate,
-): Promise<Lineset> {
-  const system = await venueUnitSystem(db, actor.venueId)
-  await findOwn(db, actor, id)
-  await refuseTakenNumber(db, actor, body.number, id)
-  const { version, ...fields } = body
-  await db.sequelize.transaction(async (transaction) => {
-    const [count] = await db.models.Lineset.update(
+/**
+ * Saves a whole lineset if nobody changed it since `version` was read: the write is conditional on that
+ * version, so a stale one is a 409, never an overwrite. Answers from the row written.
+ */
+export function updateLineset(ctx: ServiceContext, id: string, body: LinesetUpdate): Promise<Lineset> {
+  return inTransaction(ctx, async (tx) => {
+    const system = await unitsTypedIn(tx, body.unitSystem)
+    const before = await findOwn(tx, id)
+    await refuseTakenNumber(tx, body.number, id)
+    const { version, unitSystem: _typedIn, ...fields } = body
+    const [count, rows] = await tx.db.models.Lineset.update(
       { ...linesetFromApi(fields, system), version: version + 1 },
-      { where: { id, version, ...active(actor.venueId) }, transaction },
+      { where: { id, version, ...active(tx.actor.venueId) }, transaction: tx.transaction, returning: true },
     )
-    if (count === 0) throw staleVersion(`Lineset ${body.number}`)
-    await appendLinesetEvent(
-      db,
-      {
-        venueId: actor.venueId,
-        linesetId: id,
-        actorId: actor.id,
-        eventType: 'lineset-changed',
-        payload: { unitSystem: system, lineset: fields },
-      },
-      transaction,
-    )
+    if (count === 0) {
+      await findOwn(tx, id) // retired meanwhile: 404; otherwise someone saved first
+      throw staleVersion(`Lineset ${body.number}`)
+    }
+    const after = rows[0]!
+    const stored = storedFromRow(after)
+    await recordLinesetChange(tx, 'lineset-changed', id, {
+      lineset: stored,
+      changed: changedFields(storedFromRow(before), stored),
+    })
+    return linesetToApi(after, system)
   })
-  return linesetToApi(await findOwn(db, actor, id), system)
 }
 
-/** Takes a lineset out of the lists; its ledger stays. */
-export async function retireLineset(db: Database, actor: SessionUser, id: string): Promise<void> {
-  const row = await findOwn(db, actor, id)
-  await db.sequelize.transaction(async (transaction) => {
-    await row.update({ retiredAt: new Date(), version: row.version + 1 }, { transaction })
-    await appendLinesetEvent(
-      db,
-      { venueId: actor.venueId, linesetId: id, actorId: actor.id, eventType: 'lineset-retired' },
-      transaction,
+/**
+ * Takes a lineset out of the lists; its ledger stays. The write is conditional on the lineset still being in
+ * the lists, so of any number of retirements at once exactly one takes effect and the rest answer 404.
+ */
+export function retireLineset(ctx: ServiceContext, id: string): Promise<void> {
+  return inTransaction(ctx, async (tx) => {
+    const [count] = await tx.db.models.Lineset.update(
+      { retiredAt: tx.clock.now(), version: tx.db.sequelize.literal('version + 1') },
+      { where: { id, ...active(tx.actor.venueId) }, transaction: tx.transaction },
     )
+    if (count === 0) throw notFound('That lineset')
+    await recordLinesetChange(tx, 'lineset-retired', id)
   })
 }

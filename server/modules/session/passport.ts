@@ -1,19 +1,19 @@
 import { Passport } from 'passport'
 import { Strategy as LocalStrategy } from 'passport-local'
-import type { Database } from '../../db/models.js'
+import { visitorContext, type AppContext } from '../../context.js'
 import { authenticate, memberFor, type SessionKey } from './session.service.js'
 
 /** One Passport per app (not the module-wide singleton), so several apps can share a process in tests. */
-export function createPassport(db: Database) {
+export function createPassport(app: AppContext) {
   const passport = new Passport()
   passport.use(
     new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
-      authenticate(db, email, password).then((user) => done(null, user ?? false), done)
+      authenticate(visitorContext(app), email, password).then((user) => done(null, user ?? false), done)
     }),
   )
   passport.serializeUser<SessionKey>((user, done) => done(null, { userId: user.id, venueId: user.venueId }))
   passport.deserializeUser<SessionKey>((key, done) => {
-    memberFor(db, key).then((user) => done(null, user ?? false), done)
+    memberFor(visitorContext(app), key).then((user) => done(null, user ?? false), done)
   })
   return passport
 }

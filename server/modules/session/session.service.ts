@@ -1,6 +1,6 @@
 import bcrypt from 'bcryptjs'
 import type { SessionUser } from '../../../shared/schemas/session.js'
-import type { Database } from '../../db/models.js'
+import type { ServiceContext } from '../../context.js'
 
 /** What the session cookie's record keeps: who, and which venue they are working in. */
 export interface SessionKey {
@@ -12,10 +12,11 @@ export interface SessionKey {
 const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', 12)
 
 /** The member behind a session key, read fresh so a changed role or a removal takes effect at once. */
-export async function memberFor(db: Database, key: SessionKey): Promise<SessionUser | null> {
-  const membership = await db.models.Membership.findOne({
+export async function memberFor(ctx: ServiceContext<SessionUser | null>, key: SessionKey): Promise<SessionUser | null> {
+  const membership = await ctx.db.models.Membership.findOne({
     where: { userId: key.userId, venueId: key.venueId },
-    include: [{ model: db.models.User, as: 'user' }],
+    include: [{ model: ctx.db.models.User, as: 'user' }],
+    transaction: ctx.transaction,
   })
   if (!membership?.user) return null
   const { user } = membership
@@ -26,11 +27,20 @@ export async function memberFor(db: Database, key: SessionKey): Promise<SessionU
  * Checks an e-mail and password; a person with roles in several venues starts in the one they joined first.
  * @returns the member, or null for any mismatch (never saying which part was wrong).
  */
-export async function authenticate(db: Database, email: string, password: string): Promise<SessionUser | null> {
-  const user = await db.models.User.findOne({ where: { email: email.toLowerCase() } })
+export async function authenticate(
+  ctx: ServiceContext<SessionUser | null>,
+  email: string,
+  password: string,
+): Promise<SessionUser | null> {
+  const { db, transaction } = ctx
+  const user = await db.models.User.findOne({ where: { email: email.toLowerCase() }, transaction })
   const matches = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH)
   if (!user || !matches) return null
-  const membership = await db.models.Membership.findOne({ where: { userId: user.id }, order: [['createdAt', 'ASC']] })
+  const membership = await db.models.Membership.findOne({
+    where: { userId: user.id },
+    order: [['createdAt', 'ASC']],
+    transaction,
+  })
   if (!membership) return null
-  return memberFor(db, { userId: user.id, venueId: membership.venueId })
+  return memberFor(ctx, { userId: user.id, venueId: membership.venueId })
 }

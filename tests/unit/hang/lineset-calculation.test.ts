@@ -32,6 +32,7 @@ const lineset: Lineset = {
   hoistRatedCapacity: null,
   hoistSpeed: null,
   notes: '',
+  unitSystem: 'imperial',
 }
 const venue = { unitSystem: 'imperial' as const, balanceTolerance: 10, ropeLockHolding: 50, wireRopeDesignFactor: 8 }
 const brickTypes = [{ name: 'Full', unitWeight: 20, thickness: 2, quantityOwned: 100 }]

@@ -1,0 +1,22 @@
+import { systemClock } from './clock.js'
+import type { Config } from './config.js'
+import type { AppContext } from './context.js'
+import type { Database } from './db/models.js'
+import { localFolderStorage } from './files/local-folder-storage.js'
+import { postgresLivePublisher } from './live/postgres-live.js'
+import { mailNotConfigured, smtpMailSender } from './mail/smtp-mail-sender.js'
+
+/** The parts a caller of `createApp` may replace (tests: a fixed clock, a temporary folder, another mailer). */
+export type AppOverrides = Partial<Omit<AppContext, 'db'>>
+
+/** The application context from config, each part replaceable through `overrides`. */
+export function buildAppContext(config: Config, db: Database, overrides: AppOverrides = {}): AppContext {
+  return {
+    db,
+    mail: overrides.mail ?? (config.smtpUrl ? smtpMailSender(config.smtpUrl, config.mailFrom) : mailNotConfigured),
+    live: overrides.live ?? postgresLivePublisher(db.sequelize),
+    files: overrides.files ?? localFolderStorage(config.fileStorageDir),
+    clock: overrides.clock ?? systemClock,
+    publicUrl: overrides.publicUrl ?? config.publicUrl,
+  }
+}

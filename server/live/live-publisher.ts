@@ -1,0 +1,13 @@
+import type { Transaction } from 'sequelize'
+
+/** Something that changed, named so every open screen of the venue can read it again. */
+export interface LiveEvent {
+  type: 'lineset-added' | 'lineset-changed' | 'lineset-retired'
+  venueId: string
+  linesetId: string
+}
+
+/** Announces changes to every app process; an event is delivered only if `transaction` commits. */
+export interface LivePublisher {
+  publish(event: LiveEvent, transaction: Transaction): Promise<void>
+}

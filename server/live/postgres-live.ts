@@ -1,0 +1,38 @@
+import pg from 'pg'
+import type { Sequelize } from 'sequelize'
+import type { LiveEvent, LivePublisher } from './live-publisher.js'
+
+/** The one PostgreSQL channel live events travel on. */
+export const LIVE_CHANNEL = 'loftledger_live'
+
+/**
+ * Publishes with `pg_notify` inside the caller's transaction: PostgreSQL delivers it on commit and drops it
+ * on rollback, so no screen hears of a change that did not happen, and every app process hears of it.
+ */
+export function postgresLivePublisher(sequelize: Sequelize): LivePublisher {
+  return {
+    async publish(event, transaction) {
+      await sequelize.query('SELECT pg_notify(:channel, :payload)', {
+        replacements: { channel: LIVE_CHANNEL, payload: JSON.stringify(event) },
+        transaction,
+      })
+    },
+  }
+}
+
+export interface LiveListener {
+  close(): Promise<void>
+}
+
+/** Hears every live event on a dedicated connection (LISTEN holds its connection, so never a pooled one). */
+export async function listenLive(databaseUrl: string, onEvent: (event: LiveEvent) => void): Promise<LiveListener> {
+  const client = new pg.Client({ connectionString: databaseUrl })
+  client.on('error', () => {}) // a lost connection ends listening; the owner decides whether to listen again
+  await client.connect()
+  client.on('notification', (message) => {
+    if (message.channel !== LIVE_CHANNEL || !message.payload) return
+    onEvent(JSON.parse(message.payload) as LiveEvent)
+  })
+  await client.query(`LISTEN ${LIVE_CHANNEL}`)
+  return { close: () => client.end() }
+}

@@ -9,6 +9,7 @@ import { defineModels, type Database } from './db/models.js'
 import { csrfProtection } from './http/csrf.js'
 import { apiNotFound, errorHandler } from './http/errors.js'
 import { noStore, securityHeaders } from './http/headers.js'
+import { mountedRoutes, type MountedRoute } from './http/mounted-routes.js'
 import { sessionMiddleware } from './http/session.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
 import { calculationRoutes } from './modules/calculations/calculation.routes.js'
@@ -24,6 +25,8 @@ export interface AppHandle {
   db: Database
   /** The application context every module's routes were given. */
   context: AppContext
+  /** Every API route mounted, as `METHOD /api/v1/path` (the role table is checked against it). */
+  routes: MountedRoute[]
   close(): Promise<void>
 }
 
@@ -54,13 +57,16 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
   api.use(passport.initialize())
   api.use(passport.session())
   api.use(csrf.requireToken)
-  api.use('/session', sessionRoutes({ db, config, passport, csrf }))
-  api.use('/venue', venueRoutes(context))
-  api.use('/linesets', linesetRoutes(context))
-  api.use('/brick-types', brickTypeRoutes(context))
-  api.use('/people', peopleRoutes(context))
-  api.use('/invitations', invitationRoutes(context, csrf))
-  api.use('/calculations', calculationRoutes())
+  const mounts = [
+    ['/session', sessionRoutes({ db, config, passport, csrf })],
+    ['/venue', venueRoutes(context)],
+    ['/linesets', linesetRoutes(context)],
+    ['/brick-types', brickTypeRoutes(context)],
+    ['/people', peopleRoutes(context)],
+    ['/invitations', invitationRoutes(context, csrf)],
+    ['/calculations', calculationRoutes()],
+  ] as const
+  for (const [path, router] of mounts) api.use(path, router)
   api.use(apiNotFound)
   app.use('/api', noStore)
   app.use('/api/v1', api)
@@ -77,6 +83,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     app,
     db,
     context,
+    routes: mountedRoutes('/api/v1', mounts),
     close: async () => {
       await sessions.close()
       await context.mail.close()

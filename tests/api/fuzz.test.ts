@@ -63,6 +63,12 @@ const TARGETS: Target[] = [
     valid: () => ({ role: 'stage-manager', version: 999 }),
   },
   { method: 'post', path: () => '/api/v1/calculations', valid: () => calculation as Record<string, Json> },
+  { method: 'post', path: () => '/api/v1/invitations/lookup', valid: () => ({ token: 'a'.repeat(43) }) },
+  {
+    method: 'post',
+    path: () => '/api/v1/invitations/accept',
+    valid: () => ({ token: 'a'.repeat(43), name: 'Fuzz', password: 'a-long-password-here' }),
+  },
 ]
 
 const oddValues: Json[] = [
@@ -191,7 +197,7 @@ describe('generated bad requests', () => {
       fc.constantFrom('{"a":', '[1,2', '\u0000', '{"name": "\\ud800"}', 'null', '"x"', '1e999'),
     )
     await fc.assert(
-      fc.asyncProperty(raw, fc.constantFrom('linesets', 'brick-types', 'people'), async (text, noun) => {
+      fc.asyncProperty(raw, fc.constantFrom('linesets', 'brick-types', 'people', 'invitations'), async (text, noun) => {
         await expectCleanAnswer(() =>
           admin.agent
             .post(`/api/v1/${noun}`)
@@ -204,7 +210,7 @@ describe('generated bad requests', () => {
     )
     const id = fc.oneof(fc.string({ minLength: 1 }), fc.constantFrom('%00', '..%2F..', '0'.repeat(500), '%E0%A4%A'))
     await fc.assert(
-      fc.asyncProperty(id, fc.constantFrom('linesets', 'brick-types', 'people'), async (odd, noun) => {
+      fc.asyncProperty(id, fc.constantFrom('linesets', 'brick-types', 'people', 'invitations'), async (odd, noun) => {
         await expectCleanAnswer(() =>
           admin.agent.delete(`/api/v1/${noun}/${encodeURIComponent(odd)}`).set('X-CSRF-Token', admin.csrfToken),
         )

@@ -81,8 +81,9 @@ export function errorHandler(log: (error: unknown) => void): ErrorRequestHandler
   return (error, _req, res, _next) => {
     const appError = toAppError(error)
     if (appError.status === 500) log(error)
+    // A 503 names what is out of reach (the database, the mail server) by its code.
     else if (appError.status === 503)
-      console.warn(`loftledger: database unavailable (${(error as Error)?.message ?? error})`)
+      console.warn(`loftledger: ${appError.code.replace(/_/g, ' ')} (${(error as Error)?.message ?? error})`)
     const body: ErrorBody = { error: { code: appError.code, message: appError.message } }
     if (appError.fields) body.error.fields = appError.fields
     if (res.headersSent) return

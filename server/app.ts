@@ -13,6 +13,7 @@ import { mountedRoutes, type MountedRoute } from './http/mounted-routes.js'
 import { sessionMiddleware } from './http/session.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
 import { calculationRoutes } from './modules/calculations/calculation.routes.js'
+import { itemTypeRoutes } from './modules/item-types/item-type.routes.js'
 import { invitationRoutes } from './modules/invitations/invitation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
 import { peopleRoutes } from './modules/people/people.routes.js'
@@ -62,6 +63,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/venue', venueRoutes(context)],
     ['/linesets', linesetRoutes(context)],
     ['/brick-types', brickTypeRoutes(context)],
+    ['/item-types', itemTypeRoutes(context)],
     ['/people', peopleRoutes(context)],
     ['/invitations', invitationRoutes(context, csrf)],
     ['/calculations', calculationRoutes()],

@@ -2,6 +2,7 @@ import type { Sequelize } from 'sequelize'
 import { defineAttachmentModel } from '../modules/attachments/attachment.model.js'
 import { defineHangItemModel } from '../modules/hangs/hang-item.model.js'
 import { defineHangModel } from '../modules/hangs/hang.model.js'
+import { defineItemTypeModel } from '../modules/item-types/item-type.model.js'
 import { defineInvitationModel } from '../modules/invitations/invitation.model.js'
 import { defineWeightChangeTicketModel } from '../modules/tickets/weight-change-ticket.model.js'
 import { defineBrickTypeModel } from '../modules/brick-types/brick-type.model.js'
@@ -25,6 +26,7 @@ export function defineModels(sequelize: Sequelize) {
     WeightChangeTicket: defineWeightChangeTicketModel(sequelize),
     Attachment: defineAttachmentModel(sequelize),
     Invitation: defineInvitationModel(sequelize),
+    ItemType: defineItemTypeModel(sequelize),
   }
   models.Membership.belongsTo(models.User, { foreignKey: 'userId', as: 'user' })
   models.User.hasMany(models.Membership, { foreignKey: 'userId', as: 'memberships' })

@@ -16,3 +16,11 @@ export const PEOPLE_MANAGERS: readonly Role[] = ['administrator']
 
 export const canEditInventory = (role: Role | undefined) => !!role && INVENTORY_EDITORS.includes(role)
 export const canManagePeople = (role: Role | undefined) => !!role && PEOPLE_MANAGERS.includes(role)
+
+/** Who may enter hangs and keep the venue's item library: the fly crew as well as those who approve. */
+export const HANG_EDITORS: readonly Role[] = ['administrator', 'technical-director', 'fly-operator']
+/** Who may add and change productions. */
+export const PRODUCTION_MANAGERS: readonly Role[] = ['administrator', 'technical-director']
+
+export const canEditHangs = (role: Role | undefined) => !!role && HANG_EDITORS.includes(role)
+export const canManageProductions = (role: Role | undefined) => !!role && PRODUCTION_MANAGERS.includes(role)

@@ -54,6 +54,17 @@ const TARGETS: Target[] = [
   },
   {
     method: 'post',
+    path: () => '/api/v1/item-types',
+    valid: () => ({
+      name: 'Fuzz',
+      category: 'lighting',
+      unitWeight: 11,
+      allowancePerUnit: 1.5,
+      unitSystem: 'imperial',
+    }),
+  },
+  {
+    method: 'post',
     path: () => '/api/v1/people',
     valid: () => ({ email: 'fuzz@alpha.test', name: 'Fuzz', role: 'stage-manager' }),
   },

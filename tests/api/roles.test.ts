@@ -25,6 +25,12 @@ const editors = (ok: number): Record<Role, number> => ({
   'fly-operator': 403,
   'stage-manager': 403,
 })
+const hangEditors = (ok: number): Record<Role, number> => ({
+  administrator: ok,
+  'technical-director': ok,
+  'fly-operator': ok,
+  'stage-manager': 403,
+})
 const adminOnly = (ok: number): Record<Role, number> => ({
   administrator: ok,
   'technical-director': 403,
@@ -109,6 +115,37 @@ const ROUTES: RouteCase[] = [
     expected: editors(409),
   },
   { method: 'delete', path: () => '/api/v1/brick-types/00000000-0000-4000-8000-000000000000', expected: editors(404) },
+  { method: 'get', path: () => '/api/v1/item-types', expected: all(200) },
+  {
+    method: 'post',
+    path: () => '/api/v1/item-types',
+    body: (_f, role) => ({
+      name: `Wash ${role}`,
+      category: 'lighting',
+      unitWeight: 11,
+      allowancePerUnit: 1.5,
+      unitSystem: 'imperial',
+    }),
+    expected: hangEditors(201),
+  },
+  {
+    method: 'put',
+    path: () => '/api/v1/item-types/00000000-0000-4000-8000-000000000000',
+    body: () => ({
+      name: 'Wash',
+      category: 'lighting',
+      unitWeight: 11,
+      allowancePerUnit: 1.5,
+      unitSystem: 'imperial',
+      version: 0,
+    }),
+    expected: hangEditors(404),
+  },
+  {
+    method: 'delete',
+    path: () => '/api/v1/item-types/00000000-0000-4000-8000-000000000000',
+    expected: hangEditors(404),
+  },
   { method: 'get', path: () => '/api/v1/people', expected: adminOnly(200) },
   {
     method: 'post',

@@ -1,5 +1,6 @@
 import foundation from './0001-foundation.js'
 import venueBoundTicketsRetiredBricksInvitations from './0002-venue-bound-tickets-retired-bricks-invitations.js'
+import itemLibraryProductions from './0003-item-library-productions.js'
 
 export interface Migration {
   name: string
@@ -9,4 +10,4 @@ export interface Migration {
 }
 
 /** Every migration, in order. A new one is a new file here, appended to this list; never edit a landed one. */
-export const migrations: Migration[] = [foundation, venueBoundTicketsRetiredBricksInvitations]
+export const migrations: Migration[] = [foundation, venueBoundTicketsRetiredBricksInvitations, itemLibraryProductions]

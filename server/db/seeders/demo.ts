@@ -1,13 +1,16 @@
 import bcrypt from 'bcryptjs'
 import { brickTypeInputSchema } from '../../../shared/schemas/brick-type.js'
+import { itemTypeInputSchema } from '../../../shared/schemas/item-type.js'
 import { linesetInputSchema } from '../../../shared/schemas/lineset.js'
 import type { SessionUser } from '../../../shared/schemas/session.js'
 import type { AppContext } from '../../context.js'
 import { createBrickType } from '../../modules/brick-types/brick-type.service.js'
+import { createItemType } from '../../modules/item-types/item-type.service.js'
 import { createLineset } from '../../modules/linesets/lineset.service.js'
 import { createAccount, joinVenue, PASSWORD_HASH_ROUNDS } from '../../modules/people/accounts.js'
 import { createVenue } from '../../modules/venues/venue.service.js'
 import { DEMO_BRICK_TYPES, DEMO_LINESETS } from './demo-linesets.js'
+import { DEMO_ITEM_TYPES } from './demo-item-types.js'
 import { DEMO_PASSWORD, DEMO_PEOPLE } from './demo-people.js'
 
 export const DEMO_VENUE_NAME = 'Fennwick Street Playhouse'
@@ -39,6 +42,7 @@ export async function seedDemoIfEmpty(app: AppContext): Promise<boolean> {
     // Demo data obeys the same contract as the forms.
     for (const lineset of DEMO_LINESETS) await createLineset(asAdministrator, linesetInputSchema.parse(lineset))
     for (const brick of DEMO_BRICK_TYPES) await createBrickType(asAdministrator, brickTypeInputSchema.parse(brick))
+    for (const item of DEMO_ITEM_TYPES) await createItemType(asAdministrator, itemTypeInputSchema.parse(item))
   })
   return true
 }

@@ -17,6 +17,7 @@ import { itemTypeRoutes } from './modules/item-types/item-type.routes.js'
 import { invitationRoutes } from './modules/invitations/invitation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
 import { peopleRoutes } from './modules/people/people.routes.js'
+import { productionRoutes } from './modules/productions/production.routes.js'
 import { createPassport } from './modules/session/passport.js'
 import { sessionRoutes } from './modules/session/session.routes.js'
 import { venueRoutes } from './modules/venues/venue.routes.js'
@@ -64,6 +65,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/linesets', linesetRoutes(context)],
     ['/brick-types', brickTypeRoutes(context)],
     ['/item-types', itemTypeRoutes(context)],
+    ['/productions', productionRoutes(context)],
     ['/people', peopleRoutes(context)],
     ['/invitations', invitationRoutes(context, csrf)],
     ['/calculations', calculationRoutes()],

@@ -4,6 +4,7 @@ import { defineHangItemModel } from '../modules/hangs/hang-item.model.js'
 import { defineHangModel } from '../modules/hangs/hang.model.js'
 import { defineItemTypeModel } from '../modules/item-types/item-type.model.js'
 import { defineInvitationModel } from '../modules/invitations/invitation.model.js'
+import { defineProductionModel } from '../modules/productions/production.model.js'
 import { defineWeightChangeTicketModel } from '../modules/tickets/weight-change-ticket.model.js'
 import { defineBrickTypeModel } from '../modules/brick-types/brick-type.model.js'
 import { defineLinesetEventModel } from '../modules/ledger/lineset-event.model.js'
@@ -27,6 +28,7 @@ export function defineModels(sequelize: Sequelize) {
     Attachment: defineAttachmentModel(sequelize),
     Invitation: defineInvitationModel(sequelize),
     ItemType: defineItemTypeModel(sequelize),
+    Production: defineProductionModel(sequelize),
   }
   models.Membership.belongsTo(models.User, { foreignKey: 'userId', as: 'user' })
   models.User.hasMany(models.Membership, { foreignKey: 'userId', as: 'memberships' })

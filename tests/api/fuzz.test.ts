@@ -65,6 +65,11 @@ const TARGETS: Target[] = [
   },
   {
     method: 'post',
+    path: () => '/api/v1/productions',
+    valid: () => ({ name: 'Fuzz', firstPerformance: '2026-11-20', lastPerformance: '2027-01-10', state: 'planning' }),
+  },
+  {
+    method: 'post',
     path: () => '/api/v1/people',
     valid: () => ({ email: 'fuzz@alpha.test', name: 'Fuzz', role: 'stage-manager' }),
   },

@@ -146,6 +146,30 @@ const ROUTES: RouteCase[] = [
     path: () => '/api/v1/item-types/00000000-0000-4000-8000-000000000000',
     expected: hangEditors(404),
   },
+  { method: 'get', path: () => '/api/v1/productions', expected: all(200) },
+  {
+    method: 'post',
+    path: () => '/api/v1/productions',
+    body: (_f, role) => ({
+      name: `Show ${role}`,
+      firstPerformance: '2026-11-20',
+      lastPerformance: '2027-01-10',
+      state: 'planning',
+    }),
+    expected: editors(201),
+  },
+  {
+    method: 'put',
+    path: () => '/api/v1/productions/00000000-0000-4000-8000-000000000000',
+    body: () => ({
+      name: 'Show',
+      firstPerformance: '2026-11-20',
+      lastPerformance: '2027-01-10',
+      state: 'running',
+      version: 0,
+    }),
+    expected: editors(404),
+  },
   { method: 'get', path: () => '/api/v1/people', expected: adminOnly(200) },
   {
     method: 'post',

@@ -1,6 +1,7 @@
 import bcrypt from 'bcryptjs'
 import { brickTypeInputSchema } from '../../../shared/schemas/brick-type.js'
 import { itemTypeInputSchema } from '../../../shared/schemas/item-type.js'
+import { productionInputSchema } from '../../../shared/schemas/production.js'
 import { linesetInputSchema } from '../../../shared/schemas/lineset.js'
 import type { SessionUser } from '../../../shared/schemas/session.js'
 import type { AppContext } from '../../context.js'
@@ -8,9 +9,11 @@ import { createBrickType } from '../../modules/brick-types/brick-type.service.js
 import { createItemType } from '../../modules/item-types/item-type.service.js'
 import { createLineset } from '../../modules/linesets/lineset.service.js'
 import { createAccount, joinVenue, PASSWORD_HASH_ROUNDS } from '../../modules/people/accounts.js'
+import { createProduction } from '../../modules/productions/production.service.js'
 import { createVenue } from '../../modules/venues/venue.service.js'
 import { DEMO_BRICK_TYPES, DEMO_LINESETS } from './demo-linesets.js'
 import { DEMO_ITEM_TYPES } from './demo-item-types.js'
+import { demoProduction } from './demo-production.js'
 import { DEMO_PASSWORD, DEMO_PEOPLE } from './demo-people.js'
 
 export const DEMO_VENUE_NAME = 'Fennwick Street Playhouse'
@@ -43,6 +46,7 @@ export async function seedDemoIfEmpty(app: AppContext): Promise<boolean> {
     for (const lineset of DEMO_LINESETS) await createLineset(asAdministrator, linesetInputSchema.parse(lineset))
     for (const brick of DEMO_BRICK_TYPES) await createBrickType(asAdministrator, brickTypeInputSchema.parse(brick))
     for (const item of DEMO_ITEM_TYPES) await createItemType(asAdministrator, itemTypeInputSchema.parse(item))
+    await createProduction(asAdministrator, productionInputSchema.parse(demoProduction(app.clock.now())))
   })
   return true
 }

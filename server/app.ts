@@ -14,6 +14,7 @@ import { sessionMiddleware } from './http/session.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
 import { calculationRoutes } from './modules/calculations/calculation.routes.js'
 import { itemTypeRoutes } from './modules/item-types/item-type.routes.js'
+import { hangRoutes } from './modules/hangs/hang.routes.js'
 import { invitationRoutes } from './modules/invitations/invitation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
 import { peopleRoutes } from './modules/people/people.routes.js'
@@ -63,6 +64,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/session', sessionRoutes({ db, config, passport, csrf })],
     ['/venue', venueRoutes(context)],
     ['/linesets', linesetRoutes(context)],
+    ['/linesets', hangRoutes(context)],
     ['/brick-types', brickTypeRoutes(context)],
     ['/item-types', itemTypeRoutes(context)],
     ['/productions', productionRoutes(context)],

@@ -34,6 +34,7 @@ export function defineModels(sequelize: Sequelize) {
   models.User.hasMany(models.Membership, { foreignKey: 'userId', as: 'memberships' })
   models.LinesetEvent.belongsTo(models.User, { foreignKey: 'actorId', as: 'actor' })
   models.Hang.hasMany(models.HangItem, { foreignKey: 'hangId', as: 'items' })
+  models.Hang.belongsTo(models.User, { foreignKey: 'createdBy', as: 'creator' })
   models.Lineset.hasMany(models.Hang, { foreignKey: 'linesetId', as: 'hangs' })
   return models
 }

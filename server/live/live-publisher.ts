@@ -2,7 +2,7 @@ import type { Transaction } from 'sequelize'
 
 /** Something that changed, named so every open screen of the venue can read it again. */
 export interface LiveEvent {
-  type: 'lineset-added' | 'lineset-changed' | 'lineset-retired'
+  type: 'lineset-added' | 'lineset-changed' | 'lineset-retired' | 'hang-saved'
   venueId: string
   linesetId: string
 }

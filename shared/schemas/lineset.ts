@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import type { Quantity } from '../units/systems.js'
+import type { CurrentHang } from './hang.js'
 import {
   nonNegative,
   optionalNonNegative,
@@ -118,6 +119,11 @@ export interface Lineset extends LinesetInput {
   id: string
   version: number
   updatedAt: string
+}
+
+/** A lineset in the list, with what hangs on it now (its latest saved revision), if anything. */
+export interface LinesetListItem extends Lineset {
+  currentHang: CurrentHang | null
 }
 
 /** Which quantity each figure of a lineset is entered and stored in (pick points are lengths too). */

@@ -23,7 +23,10 @@ export const requiredText = (max: number) =>
   z.string({ error: 'Enter some text' }).trim().min(1, 'Must not be empty').max(max, `At most ${max} characters`)
 
 /** Optimistic-lock token every update carries; a stale one is refused with 409. */
-export const versionField = () => z.number({ error: 'Version is required' }).int().min(0)
+// A version is a PostgreSQL integer that a save adds one to, so the highest a request may carry is one below its top.
+const HIGHEST_VERSION = 2147483646
+export const versionField = () =>
+  z.number({ error: 'Version is required' }).int().min(0).max(HIGHEST_VERSION, 'No record has that version')
 
 /**
  * The unit system a write's figures were typed in (the venue's, as the form last read it). The server

@@ -12,6 +12,7 @@ export const DISPLAY_PLACES: Readonly<Record<Quantity, number>> = {
   length: 2,
   shortLength: 2,
   weightPerLength: 3,
+  weightPerArea: 4,
   speed: 2,
   momentOfInertia: 3,
   sectionModulus: 3,

@@ -14,6 +14,7 @@ export const QUANTITIES = [
   'length',
   'shortLength',
   'weightPerLength',
+  'weightPerArea',
   'speed',
   'momentOfInertia',
   'sectionModulus',
@@ -45,6 +46,11 @@ const UNITS: Readonly<Record<Quantity, Readonly<Record<UnitSystem, UnitDefinitio
   weightPerLength: {
     imperial: { siPerUnit: KILOGRAMS_PER_POUND.div(METRES_PER_FOOT), label: 'lb/ft' },
     metric: { siPerUnit: Dec(1), label: 'kg/m' },
+  },
+  // Fabric by area (soft goods): lb/ft² or kg/m².
+  weightPerArea: {
+    imperial: { siPerUnit: KILOGRAMS_PER_POUND.div(METRES_PER_FOOT.pow(2)), label: 'lb/ft²' },
+    metric: { siPerUnit: Dec(1), label: 'kg/m²' },
   },
   speed: {
     imperial: { siPerUnit: METRES_PER_FOOT.div(60), label: 'ft/min' },

@@ -6,6 +6,7 @@ const ENTRY_PLACES: Readonly<Record<Quantity, Readonly<Record<UnitSystem, number
   length: { imperial: 3, metric: 3 },
   shortLength: { imperial: 3, metric: 1 },
   weightPerLength: { imperial: 3, metric: 3 },
+  weightPerArea: { imperial: 4, metric: 3 },
   speed: { imperial: 1, metric: 3 },
   momentOfInertia: { imperial: 4, metric: 0 },
   sectionModulus: { imperial: 4, metric: 0 },

@@ -13,6 +13,10 @@ beforeAll(async () => {
 })
 afterAll(() => app.stop())
 
+// Hangs written straight through the model take the next revision of this file's own count (one per lineset).
+let nextRevision = 1
+const revision = () => nextRevision++
+
 describe('the tables the workflow fills', () => {
   it('when a hang with items and a ticket are written, then they read back through the models', async () => {
     const { Hang, HangItem, WeightChangeTicket } = app.handle.db.models
@@ -21,13 +25,16 @@ describe('the tables the workflow fills', () => {
       linesetId: alpha.linesetId,
       title: 'Act one drop',
       unitSystem: 'imperial',
+      revision: revision(),
       createdBy: null,
       calculationInput: null,
       calculationResult: null,
     })
     await HangItem.create({
+      venueId: alpha.venueId,
       hangId: hang.id,
       position: 0,
+      entryKind: 'point',
       label: 'Drop',
       weight: '45.359237',
       at: '6.096',
@@ -56,6 +63,7 @@ describe('the tables the workflow fills', () => {
       linesetId: beta.linesetId,
       title: 'Cross-venue',
       unitSystem: 'imperial',
+      revision: revision(),
       createdBy: null,
       calculationInput: null,
       calculationResult: null,
@@ -63,19 +71,22 @@ describe('the tables the workflow fills', () => {
     await expect(attempt).rejects.toThrow(/foreign key/)
   })
 
-  it('when a hang item is neither a point nor a spread load, then the database refuses it', async () => {
+  it('when a hang item lacks what its shape needs (a point load without its position), then the database refuses it', async () => {
     const hang = await app.handle.db.models.Hang.create({
       venueId: alpha.venueId,
       linesetId: alpha.linesetId,
       title: 'Bad item',
       unitSystem: 'imperial',
+      revision: revision(),
       createdBy: null,
       calculationInput: null,
       calculationResult: null,
     })
     const attempt = app.handle.db.models.HangItem.create({
+      venueId: alpha.venueId,
       hangId: hang.id,
       position: 0,
+      entryKind: 'point',
       label: 'Nothing',
       weight: '1',
       at: null,
@@ -94,6 +105,7 @@ describe('tickets stay within their venue', () => {
       linesetId: fixture.linesetId,
       title: 'A hang',
       unitSystem: 'imperial',
+      revision: revision(),
       createdBy: null,
       calculationInput: null,
       calculationResult: null,

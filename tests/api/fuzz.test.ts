@@ -65,6 +65,51 @@ const TARGETS: Target[] = [
   },
   {
     method: 'post',
+    path: (v) => `/api/v1/linesets/${v.linesetId}/hangs`,
+    valid: () =>
+      ({
+        title: 'Fuzz',
+        basedOnRevision: null,
+        unitSystem: 'imperial',
+        items: [
+          { label: 'Drop', category: 'other', weight: 120, at: 20 },
+          { label: 'Cable', category: 'hardware', weightPerLength: 0.5, from: 0, to: 40 },
+          {
+            label: 'Border',
+            category: 'soft-goods',
+            from: 0,
+            to: 40,
+            fabric: { gradeOzPerLinearYard: 25, height: 20, fullnessPercent: 100 },
+          },
+          { label: 'Wall', category: 'scenery', weight: 300, points: [5, 20, 35] },
+        ],
+      }) as Record<string, Json>,
+  },
+  {
+    method: 'put',
+    path: (v) => `/api/v1/item-types/${v.brickTypeId}`,
+    valid: () => ({
+      name: 'Fuzz',
+      category: 'lighting',
+      unitWeight: 11,
+      allowancePerUnit: 1,
+      unitSystem: 'imperial',
+      version: 0,
+    }),
+  },
+  {
+    method: 'put',
+    path: (v) => `/api/v1/productions/${v.brickTypeId}`,
+    valid: () => ({
+      name: 'Fuzz',
+      firstPerformance: '2026-11-20',
+      lastPerformance: '2027-01-10',
+      state: 'running',
+      version: 0,
+    }),
+  },
+  {
+    method: 'post',
     path: () => '/api/v1/productions',
     valid: () => ({ name: 'Fuzz', firstPerformance: '2026-11-20', lastPerformance: '2027-01-10', state: 'planning' }),
   },

@@ -86,6 +86,19 @@ const ROUTES: RouteCase[] = [
     expected: editors(409),
   },
   { method: 'delete', path: () => '/api/v1/linesets/00000000-0000-4000-8000-000000000000', expected: adminOnly(404) },
+  { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}/hangs`, expected: all(200) },
+  {
+    method: 'post',
+    path: (f) => `/api/v1/linesets/${f.linesetId}/hangs`,
+    // Based on a revision that does not exist: a role let through meets the 409, one stopped meets 403.
+    body: () => ({ title: 'Electric', basedOnRevision: 999, items: [], unitSystem: 'imperial' }),
+    expected: hangEditors(409),
+  },
+  {
+    method: 'get',
+    path: (f) => `/api/v1/linesets/${f.linesetId}/hangs/00000000-0000-4000-8000-000000000000`,
+    expected: all(404),
+  },
   { method: 'get', path: () => '/api/v1/brick-types', expected: all(200) },
   {
     method: 'post',
@@ -230,9 +243,14 @@ const OPEN_TO_ANYONE = [
   'POST /api/v1/invitations/accept',
 ]
 
-/** A row's route as the router declares it: ids written as `:id`. */
+const UUID = '[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}'
+
+/** A row's route as the router declares it: ids written as `:id` (a hang within a lineset as `:hangId`). */
 const labelOf = (route: RouteCase) =>
-  `${route.method.toUpperCase()} ${route.path(named).replace(/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/g, ':id')}`
+  `${route.method.toUpperCase()} ${route
+    .path(named)
+    .replace(new RegExp(`(/hangs/)${UUID}`), '$1:hangId')
+    .replace(new RegExp(UUID, 'g'), ':id')}`
 
 describe('role x route matrix', () => {
   it('when the app mounts its routes, then every one has a row in this table or is open to anyone, and no row names a route that is gone', () => {

@@ -1,6 +1,7 @@
 import foundation from './0001-foundation.js'
 import venueBoundTicketsRetiredBricksInvitations from './0002-venue-bound-tickets-retired-bricks-invitations.js'
 import itemLibraryProductions from './0003-item-library-productions.js'
+import hangRevisions from './0004-hang-revisions.js'
 
 export interface Migration {
   name: string
@@ -10,4 +11,9 @@ export interface Migration {
 }
 
 /** Every migration, in order. A new one is a new file here, appended to this list; never edit a landed one. */
-export const migrations: Migration[] = [foundation, venueBoundTicketsRetiredBricksInvitations, itemLibraryProductions]
+export const migrations: Migration[] = [
+  foundation,
+  venueBoundTicketsRetiredBricksInvitations,
+  itemLibraryProductions,
+  hangRevisions,
+]

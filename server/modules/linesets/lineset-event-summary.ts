@@ -1,3 +1,5 @@
+import { displayQuantity } from '../../../shared/units/display.js'
+import type { UnitSystem } from '../../../shared/units/systems.js'
 import type { StoredLineset } from './lineset.mapper.js'
 
 // Plain words for each field, as a person on the crew would say them.
@@ -33,8 +35,23 @@ function listed(words: string[]): string {
   return `${words.slice(0, -1).join(', ')} and ${words.at(-1)}`
 }
 
-/** What a ledger entry says happened, in one plain sentence. */
-export function summarizeLinesetEvent(type: string, payload: Record<string, unknown>): string {
+interface SavedHang {
+  revision?: number
+  title?: string
+  items?: number
+  totalLoad?: number | null
+}
+
+function savedHangWords(hang: SavedHang | undefined, system: UnitSystem): string {
+  if (!hang) return 'Saved a hang'
+  const items = hang.items === 1 ? '1 item' : `${hang.items ?? 0} items`
+  const total =
+    typeof hang.totalLoad === 'number' ? `, ${displayQuantity(hang.totalLoad, 'weight', system)} in all` : ''
+  return `Saved hang revision ${hang.revision}, “${hang.title}”: ${items}${total}`
+}
+
+/** What a ledger entry says happened, in one plain sentence; `payload` with its figures in `system`. */
+export function summarizeLinesetEvent(type: string, payload: Record<string, unknown>, system: UnitSystem): string {
   const lineset = payload.lineset as Partial<StoredLineset> | undefined
   switch (type) {
     case 'lineset-added':
@@ -44,6 +61,8 @@ export function summarizeLinesetEvent(type: string, payload: Record<string, unkn
       const words = (payload.changed as string[]).map((field) => FIELD_WORDS[field as keyof StoredLineset] ?? field)
       return words.length ? `Changed the ${listed(words)}` : 'Saved without changes'
     }
+    case 'hang-saved':
+      return savedHangWords(payload.hang as SavedHang | undefined, system)
     case 'lineset-retired':
       return 'Retired: taken out of the lists, its history kept'
     default: {

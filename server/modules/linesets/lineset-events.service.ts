@@ -36,14 +36,17 @@ export async function listLinesetEvents(
   })
   const page = rows.slice(0, query.limit)
   return {
-    events: page.map((row) => ({
-      id: String(row.id),
-      type: row.eventType,
-      occurredAt: row.occurredAt.toISOString(),
-      actor: row.actor ? { id: row.actor.id, name: row.actor.name } : null,
-      summary: summarizeLinesetEvent(row.eventType, row.payload),
-      payload: payloadInUnits(row.payload, system),
-    })),
+    events: page.map((row) => {
+      const payload = payloadInUnits(row.payload, system)
+      return {
+        id: String(row.id),
+        type: row.eventType,
+        occurredAt: row.occurredAt.toISOString(),
+        actor: row.actor ? { id: row.actor.id, name: row.actor.name } : null,
+        summary: summarizeLinesetEvent(row.eventType, payload, system),
+        payload,
+      }
+    }),
     next: rows.length > query.limit ? String(page.at(-1)!.id) : null,
   }
 }

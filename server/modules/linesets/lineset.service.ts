@@ -1,6 +1,7 @@
-import type { Lineset, LinesetInput, LinesetUpdate } from '../../../shared/schemas/lineset.js'
+import type { Lineset, LinesetInput, LinesetListItem, LinesetUpdate } from '../../../shared/schemas/lineset.js'
 import { inTransaction, type ServiceContext, type TransactionContext } from '../../context.js'
 import { AppError, notFound, staleVersion } from '../../http/errors.js'
+import { currentHangs } from '../hangs/current-hangs.js'
 import { unitsTypedIn } from '../venues/units.js'
 import { venueUnitSystem } from '../venues/venue.service.js'
 import { recordLinesetChange } from './lineset-history.js'
@@ -8,15 +9,16 @@ import { changedFields, linesetFromApi, linesetToApi, storedFromRow } from './li
 
 const active = (venueId: string) => ({ venueId, retiredAt: null })
 
-/** Every lineset in service or not, in number order; retired ones are history only. */
-export async function listLinesets(ctx: ServiceContext): Promise<Lineset[]> {
+/** Every lineset in service or not, in number order, with its latest saved hang; retired ones are history only. */
+export async function listLinesets(ctx: ServiceContext): Promise<LinesetListItem[]> {
   const system = await venueUnitSystem(ctx)
   const rows = await ctx.db.models.Lineset.findAll({
     where: active(ctx.actor.venueId),
     order: [['number', 'ASC']],
     transaction: ctx.transaction,
   })
-  return rows.map((row) => linesetToApi(row, system))
+  const hangs = await currentHangs(ctx, system)
+  return rows.map((row) => ({ ...linesetToApi(row, system), currentHang: hangs.get(row.id) ?? null }))
 }
 
 async function findOwn(ctx: ServiceContext, id: string) {

@@ -1,0 +1,61 @@
+import { z } from 'zod'
+import type { HangEntry } from '../hang/hang-items.js'
+import type { UnitSystem } from '../units/systems.js'
+import type { CalculationResult } from './calculation-result.js'
+import { MAX_ITEMS } from './calculation.js'
+import { hangEntrySchema } from './hang-entry.js'
+import { plainText } from './plain-text.js'
+import { typedInField } from './quantity.js'
+
+/**
+ * A new revision of a lineset's hang, as the fly operator saves it. `basedOnRevision` is the revision the form
+ * started from (`null` for a lineset's first); the server refuses the save when a newer one exists. Any result
+ * a client sends is not part of this: the server computes its own.
+ */
+export const hangSaveSchema = z.object({
+  title: plainText(120, { required: true }),
+  productionId: z.uuid({ error: 'Choose a production' }).nullable().optional(),
+  basedOnRevision: z
+    .number({ error: 'Say which revision this was based on, or null' })
+    .int('Must be a whole number')
+    .min(1, 'Revisions count from 1')
+    .nullable(),
+  items: z
+    .array(hangEntrySchema, { error: 'List the items' })
+    .max(MAX_ITEMS, `At most ${MAX_ITEMS} items can hang on one batten`),
+  unitSystem: typedInField(),
+})
+export type HangSave = z.infer<typeof hangSaveSchema>
+
+/** `/linesets/:id/hangs/:hangId`. */
+export const hangParamsSchema = z.object({ id: z.uuid(), hangId: z.uuid() })
+
+/** One revision in a lineset's list of hangs, newest first; `totalLoad` in the venue's units. */
+export interface HangSummary {
+  id: string
+  revision: number
+  title: string
+  productionId: string | null
+  createdAt: string
+  createdBy: { id: string; name: string } | null
+  totalLoad: number
+}
+
+/**
+ * A saved revision: the items as entered (in the venue's units) and the engine's result, exactly as
+ * `POST /calculations` answers for the expanded input, in `result.units` (the venue's when it was saved).
+ */
+export interface HangRevision extends HangSummary {
+  linesetId: string
+  unitSystem: UnitSystem
+  items: HangEntry[]
+  result: CalculationResult
+}
+
+/** What the lineset list shows of each lineset's latest revision. */
+export interface CurrentHang {
+  id: string
+  revision: number
+  title: string
+  totalLoad: number
+}

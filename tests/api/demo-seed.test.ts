@@ -19,16 +19,37 @@ describe('the demo venue', () => {
     expect(linesets).toHaveLength(DEMO_LINESETS.length)
     const administrator = await User.findOne({ where: { email: 'admin@demo.test' } })
     for (const { id } of linesets) {
-      const entries = await LinesetEvent.findAll({ where: { linesetId: id } })
-      expect(entries.map((entry) => [entry.eventType, entry.actorId])).toEqual([['lineset-added', administrator!.id]])
+      const entries = await LinesetEvent.findAll({ where: { linesetId: id, eventType: 'lineset-added' } })
+      expect(entries.map((entry) => entry.actorId)).toEqual([administrator!.id])
     }
   })
 
-  it('when the demo is read through the API, then its history shows the addition in plain words', async () => {
+  it('when the demo is read through the API, then its history shows the addition and the saved hang in plain words', async () => {
     const reader = await signedIn(app.url, 'sm@demo.test', DEMO_PASSWORD)
     const first = (await reader.get('/api/v1/linesets').expect(200)).body[0]
     const history = (await reader.get(`/api/v1/linesets/${first.id}/events`).expect(200)).body
-    expect(history.events.map((e: { summary: string }) => e.summary)).toEqual([`Added as lineset 1, ${first.name}`])
+    expect(history.events.map((e: { summary: string }) => e.summary)).toEqual([
+      expect.stringMatching(/^Saved hang revision 1, “Main valance”: 1 item, [\d,.]+ lb in all$/),
+      `Added as lineset 1, ${first.name}`,
+    ])
+  })
+
+  it('when the demo is seeded, then a running production has hangs on at least 15 linesets, some with several revisions', async () => {
+    const reader = await signedIn(app.url, 'sm@demo.test', DEMO_PASSWORD)
+    const [show] = (await reader.get('/api/v1/productions').expect(200)).body
+    expect(show.state).toBe('running')
+    const linesets = (await reader.get('/api/v1/linesets').expect(200)).body as {
+      id: string
+      currentHang: { revision: number } | null
+    }[]
+    const hung = linesets.filter((lineset) => lineset.currentHang)
+    expect(hung.length).toBeGreaterThanOrEqual(15)
+    expect(hung.filter((lineset) => lineset.currentHang!.revision >= 2).length).toBeGreaterThanOrEqual(3)
+    const revisions = (await reader.get(`/api/v1/linesets/${hung[0]!.id}/hangs`).expect(200)).body
+    expect(revisions[0].productionId).toBe(show.id)
+    const library = (await reader.get('/api/v1/item-types').expect(200)).body as { notes: string }[]
+    expect(library.length).toBeGreaterThan(5)
+    for (const item of library) expect(item.notes).toMatch(/^Demo data/)
   })
 
   it('when seeding is asked again, then it leaves the venue as it was', async () => {

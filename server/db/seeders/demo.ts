@@ -1,8 +1,9 @@
 import bcrypt from 'bcryptjs'
 import { brickTypeInputSchema } from '../../../shared/schemas/brick-type.js'
-import { itemTypeInputSchema } from '../../../shared/schemas/item-type.js'
+import { itemTypeInputSchema, type ItemCategory } from '../../../shared/schemas/item-type.js'
 import { productionInputSchema } from '../../../shared/schemas/production.js'
 import { linesetInputSchema } from '../../../shared/schemas/lineset.js'
+import type { Role } from '../../../shared/schemas/role.js'
 import type { SessionUser } from '../../../shared/schemas/session.js'
 import type { AppContext } from '../../context.js'
 import { createBrickType } from '../../modules/brick-types/brick-type.service.js'
@@ -12,6 +13,7 @@ import { createAccount, joinVenue, PASSWORD_HASH_ROUNDS } from '../../modules/pe
 import { createProduction } from '../../modules/productions/production.service.js'
 import { createVenue } from '../../modules/venues/venue.service.js'
 import { DEMO_BRICK_TYPES, DEMO_LINESETS } from './demo-linesets.js'
+import { seedDemoHangs } from './demo-hang-seeding.js'
 import { DEMO_ITEM_TYPES } from './demo-item-types.js'
 import { demoProduction } from './demo-production.js'
 import { DEMO_PASSWORD, DEMO_PEOPLE } from './demo-people.js'
@@ -34,19 +36,31 @@ export async function seedDemoIfEmpty(app: AppContext): Promise<boolean> {
       ropeLockHolding: 50,
       wireRopeDesignFactor: 8,
     })
-    let administrator: SessionUser | undefined
+    const members = new Map<Role, SessionUser>()
     for (const person of DEMO_PEOPLE) {
       const user = await createAccount(setup, { email: person.email, name: person.name, passwordHash })
       await joinVenue(setup, { userId: user.id, venueId: venue.id, role: person.role })
-      if (person.role === 'administrator')
-        administrator ??= { id: user.id, email: user.email, name: user.name, role: person.role, venueId: venue.id }
+      if (!members.has(person.role))
+        members.set(person.role, {
+          id: user.id,
+          email: user.email,
+          name: user.name,
+          role: person.role,
+          venueId: venue.id,
+        })
     }
-    const asAdministrator = { ...app, actor: administrator!, transaction }
+    const asAdministrator = { ...app, actor: members.get('administrator')!, transaction }
     // Demo data obeys the same contract as the forms.
-    for (const lineset of DEMO_LINESETS) await createLineset(asAdministrator, linesetInputSchema.parse(lineset))
+    const linesets = new Map<number, string>()
+    for (const lineset of DEMO_LINESETS)
+      linesets.set(lineset.number, (await createLineset(asAdministrator, linesetInputSchema.parse(lineset))).id)
     for (const brick of DEMO_BRICK_TYPES) await createBrickType(asAdministrator, brickTypeInputSchema.parse(brick))
-    for (const item of DEMO_ITEM_TYPES) await createItemType(asAdministrator, itemTypeInputSchema.parse(item))
-    await createProduction(asAdministrator, productionInputSchema.parse(demoProduction(app.clock.now())))
+    const library = new Map<string, { id: string; category: ItemCategory }>()
+    for (const item of DEMO_ITEM_TYPES)
+      library.set(item.name, await createItemType(asAdministrator, itemTypeInputSchema.parse(item)))
+    const show = await createProduction(asAdministrator, productionInputSchema.parse(demoProduction(app.clock.now())))
+    const asFlyOperator = { ...app, actor: members.get('fly-operator')!, transaction }
+    await seedDemoHangs(asFlyOperator, linesets, library, show.id)
   })
   return true
 }

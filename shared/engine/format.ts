@@ -1,4 +1,4 @@
-import { roundTo, unitLabel, type Quantity, type UnitSystem } from '../units/index.js'
+import { Dec, unitLabel, type Quantity, type UnitSystem } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
 
 /**
@@ -9,11 +9,12 @@ import type { Decimal } from 'decimal.js'
  * formatFigure('-1234.567') // '-1,234.57'
  */
 export function formatFigure(value: Decimal.Value): string {
-  const rounded = roundTo(value, 2)
-  const [whole, fraction] = Math.abs(rounded).toFixed(2).split('.') as [string, string]
+  const rounded = Dec(value).toDecimalPlaces(2, Dec.ROUND_HALF_UP)
+  // A decimal's toFixed never turns to exponent notation, however large the figure.
+  const [whole, fraction] = rounded.abs().toFixed(2).split('.') as [string, string]
   const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',')
   const tail = fraction.replace(/0+$/, '')
-  return `${rounded < 0 ? '-' : ''}${grouped}${tail ? `.${tail}` : ''}`
+  return `${rounded.isNegative() && !rounded.isZero() ? '-' : ''}${grouped}${tail ? `.${tail}` : ''}`
 }
 
 /**

@@ -1,18 +1,15 @@
 import { z } from 'zod'
 import { ROLES, type Role } from './role.js'
-import { requiredText, versionField } from './quantity.js'
+import { versionField } from './quantity.js'
+import { emailAddress, singleLineText } from './text.js'
 
-const email = z
-  .string({ error: 'Enter an e-mail address' })
-  .trim()
-  .toLowerCase()
-  .pipe(z.email('Enter a valid e-mail address'))
+const email = emailAddress()
 const role = z.enum(ROLES, { error: 'Choose a role' })
 
 /** Adding someone to the venue: a new account, or an existing account given a role here. */
 export const personInputSchema = z.object({
   email,
-  name: requiredText(120),
+  name: singleLineText('Name', 120, { required: true }),
   role,
   password: z.string({ error: 'Enter a password' }).min(10, 'At least 10 characters').max(200).optional(),
 })

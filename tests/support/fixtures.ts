@@ -1,7 +1,7 @@
 import bcrypt from 'bcryptjs'
 import type { Role } from '../../shared/schemas/role.js'
 import { ROLES } from '../../shared/schemas/role.js'
-import { linesetInputSchema, type LinesetInput } from '../../shared/schemas/lineset.js'
+import { linesetInputSchemaFor, type LinesetInput } from '../../shared/schemas/lineset.js'
 import { toSI } from '../../shared/units/systems.js'
 import type { Database } from '../../server/db/models.js'
 import { linesetFromApi } from '../../server/modules/linesets/lineset.mapper.js'
@@ -68,7 +68,7 @@ export async function seedVenue(
       emails[role] = email
       membershipIds[role] = membership.id
     }
-    const body = linesetInputSchema.parse(sampleLineset(1))
+    const body = linesetInputSchemaFor(unitSystem).parse(sampleLineset(1))
     const lineset = await db.models.Lineset.create(
       { ...linesetFromApi(body, unitSystem), venueId: venue.id, retiredAt: null },
       { transaction },

@@ -1,5 +1,5 @@
 import bcrypt from 'bcryptjs'
-import { linesetInputSchema } from '../../../shared/schemas/lineset.js'
+import { linesetInputSchemaFor } from '../../../shared/schemas/lineset.js'
 import { toSI } from '../../../shared/units/systems.js'
 import { linesetFromApi } from '../../modules/linesets/lineset.mapper.js'
 import type { Database } from '../models.js'
@@ -31,7 +31,7 @@ export async function seedDemoIfEmpty(db: Database): Promise<boolean> {
       await db.models.Membership.create({ userId: user.id, venueId: venue.id, role: person.role }, { transaction })
     }
     for (const lineset of DEMO_LINESETS) {
-      const valid = linesetInputSchema.parse(lineset) // demo data obeys the same contract as the form
+      const valid = linesetInputSchemaFor('imperial').parse(lineset) // demo data obeys the same contract as the form
       await db.models.Lineset.create(
         { ...linesetFromApi(valid, 'imperial'), venueId: venue.id, retiredAt: null },
         { transaction },

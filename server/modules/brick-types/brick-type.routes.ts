@@ -1,10 +1,11 @@
 import { Router } from 'express'
-import { brickTypeInputSchema, brickTypeUpdateSchema } from '../../../shared/schemas/brick-type.js'
+import { brickTypeInputSchemaFor, brickTypeUpdateSchemaFor } from '../../../shared/schemas/brick-type.js'
 import { idParamsSchema } from '../../../shared/schemas/id.js'
 import { INVENTORY_EDITORS, ROLES } from '../../../shared/schemas/role.js'
 import type { Database } from '../../db/models.js'
 import { currentUser, requireRole } from '../../http/auth.js'
 import { validate } from '../../http/validate.js'
+import { validateInVenueUnits } from '../venues/venue-units.js'
 import * as brickTypes from './brick-type.service.js'
 
 export function brickTypeRoutes(db: Database) {
@@ -13,14 +14,19 @@ export function brickTypeRoutes(db: Database) {
   router.get('/', requireRole(ROLES), async (req, res) => {
     res.json(await brickTypes.listBrickTypes(db, currentUser(req)))
   })
-  router.post('/', requireRole(INVENTORY_EDITORS), validate({ body: brickTypeInputSchema }), async (req, res) => {
-    res.status(201).json(await brickTypes.createBrickType(db, currentUser(req), req.body))
-  })
+  router.post(
+    '/',
+    requireRole(INVENTORY_EDITORS),
+    validateInVenueUnits(db, brickTypeInputSchemaFor),
+    async (req, res) => {
+      res.status(201).json(await brickTypes.createBrickType(db, currentUser(req), req.body))
+    },
+  )
   router.put(
     '/:id',
     requireRole(INVENTORY_EDITORS),
     byId,
-    validate({ body: brickTypeUpdateSchema }),
+    validateInVenueUnits(db, brickTypeUpdateSchemaFor),
     async (req, res) => {
       res.json(await brickTypes.updateBrickType(db, currentUser(req), req.params.id as string, req.body))
     },

@@ -2,11 +2,12 @@ import { describe, expect, it } from 'vitest'
 import { planBricks } from '../../../shared/engine/brick-plan.js'
 import { runCalculation } from '../../../shared/engine/calculate.js'
 
-// Eight brick types with awkward, many-decimal weights: a stock no house has, but one a request can send.
+// Eight brick types with awkward, six-decimal weights: a stock no house has, but one a request can send.
+const sixPlaces = (value: number) => Math.round(value * 1e6) / 1e6
 const awkward = Array.from({ length: 8 }, (_, k) => ({
   name: `b${k}`,
-  weight: 7 + k * 1.37 + 0.000137 * k,
-  thickness: 1 + k * 0.13,
+  weight: sixPlaces(7 + k * 1.37 + 0.000137 * k),
+  thickness: sixPlaces(1 + k * 0.13),
   available: 50,
 }))
 
@@ -26,7 +27,7 @@ describe('the brick plan on an unusual stock', () => {
       kind: 'counterweight-single',
       batten: { length: 40, weightPerLength: 2.25, pickPoints: [0, 20, 40] },
       items: [{ weight: 2000, at: 20 }],
-      arbor: { emptyWeight: 90, capacity: 3000, stackLength: 1000 },
+      arbor: { emptyWeight: 90, capacity: 3000, stackLength: 390 },
       bricks: awkward,
       tolerance: 10,
     })

@@ -10,6 +10,7 @@ import { apiNotFound, errorHandler } from './http/errors.js'
 import { sessionMiddleware } from './http/session.js'
 import { signInLimiter } from './http/sign-in-limiter.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
+import { createCalculationPool, type CalculationPool } from './modules/calculations/calculation-pool.js'
 import { calculationRoutes } from './modules/calculations/calculation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
 import { peopleRoutes } from './modules/people/people.routes.js'
@@ -20,6 +21,8 @@ import { venueRoutes } from './modules/venues/venue.routes.js'
 export interface AppHandle {
   app: express.Express
   db: Database
+  /** The thread the engine runs on (tests hold it to keep a calculation in flight). */
+  calculations: CalculationPool
   close(): Promise<void>
 }
 
@@ -32,6 +35,7 @@ export function createApp(config: Config): AppHandle {
   const db: Database = { sequelize: connections.sequelize, models: defineModels(connections.sequelize) }
   const sessions = sessionMiddleware(config, connections.sessionPool)
   const passport = createPassport(db)
+  const calculations = createCalculationPool()
   const app = express()
 
   app.set('trust proxy', config.trustProxy)
@@ -61,7 +65,7 @@ export function createApp(config: Config): AppHandle {
   api.use('/linesets', linesetRoutes(db))
   api.use('/brick-types', brickTypeRoutes(db))
   api.use('/people', peopleRoutes(db))
-  api.use('/calculations', calculationRoutes())
+  api.use('/calculations', calculationRoutes(calculations))
   api.use(apiNotFound)
   app.use('/api/v1', api)
   app.use('/api', apiNotFound)
@@ -76,7 +80,9 @@ export function createApp(config: Config): AppHandle {
   return {
     app,
     db,
+    calculations,
     close: async () => {
+      await calculations.close()
       await sessions.close()
       await connections.close()
     },

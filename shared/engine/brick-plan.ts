@@ -29,7 +29,7 @@ export interface BrickPlan {
  * Every step of the search is a partial plan tried, counting loops included, so the bound holds whatever
  * the figures (a count of a million bricks costs no more than a count of ten).
  */
-export const BRICK_PLAN_WORK_LIMIT = 200_000
+export const BRICK_PLAN_WORK_LIMIT = 100_000
 
 interface Scaled {
   weight: number

@@ -82,8 +82,9 @@ export interface CountRange {
 export const COUNT_RANGES = {
   // Lift lines about 1.5 m apart along the longest batten, and then some.
   pickPoints: { min: 1, max: 24 },
-  // Items on one batten in one calculation: a full lighting pipe with its cable runs is about 100.
-  items: { min: 0, max: 1000 },
+  // Items on one batten in one calculation: a full lighting pipe with its cable runs is about 100; 250 is one
+  // every 16 cm along the longest batten. The engine's work grows with it (see DEVELOPERS.md, work limits).
+  items: { min: 0, max: 250 },
   // Brick types a calculation may weigh at once.
   brickTypes: { min: 0, max: 20 },
   // Bricks of one type: the largest houses own a few thousand.

@@ -53,6 +53,7 @@ export function createCalculationPool(): CalculationPool {
     thread.on('message', (reply: CalculationReply) => {
       const job = pending.get(reply.id)
       pending.delete(reply.id)
+      if (pending.size === 0) thread.unref()
       if ('fault' in reply) job?.reject(new Error(`calculation failed: ${reply.fault}`))
       else job?.resolve(reply.outcome)
     })
@@ -62,8 +63,6 @@ export function createCalculationPool(): CalculationPool {
     }
     thread.on('error', lost)
     thread.on('exit', (code) => lost(new Error(`the calculation thread stopped (exit code ${code})`)))
-    // An idle thread must not keep the process alive on its own.
-    thread.unref()
     return thread
   }
 
@@ -76,6 +75,8 @@ export function createCalculationPool(): CalculationPool {
       worker ??= start()
       const id = nextId++
       const job: CalculationJob = { id, body }
+      // A thread with work keeps the process alive until it answers; an idle one never does.
+      worker.ref()
       return new Promise<Outcome>((resolve, reject) => {
         pending.set(id, { resolve, reject })
         worker!.postMessage(job)

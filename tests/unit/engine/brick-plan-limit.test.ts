@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { planBricks } from '../../../shared/engine/brick-plan.js'
+import { BRICK_PLAN_WORK_LIMIT, planBricks } from '../../../shared/engine/brick-plan.js'
 import { runCalculation } from '../../../shared/engine/calculate.js'
 
 // Eight brick types with awkward, six-decimal weights: a stock no house has, but one a request can send.
@@ -13,9 +13,9 @@ const awkward = Array.from({ length: 8 }, (_, k) => ({
 
 describe('the brick plan on an unusual stock', () => {
   it('when the search reaches its work limit, then it answers at once with a plan that still fits and says it is unproven', () => {
-    const started = Date.now()
     const plan = planBricks(awkward, 1999.99, 1000)
-    expect(Date.now() - started).toBeLessThan(5000) // a guard against hanging, not a speed target (see npm run bench)
+    // Work is counted, not timed (speed lives in npm run bench).
+    expect(plan.work).toBe(BRICK_PLAN_WORK_LIMIT)
     expect(plan.complete).toBe(false)
     expect(plan.loaded.lte(1999.99)).toBe(true)
     plan.counts.forEach((count, k) => expect(count).toBeLessThanOrEqual(awkward[k]!.available))

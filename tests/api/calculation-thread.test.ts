@@ -28,11 +28,12 @@ async function untilWaiting(count: number) {
 }
 
 /** Sends a request now and records when it has been answered. */
-function send(request: PromiseLike<{ status: number; body: unknown }>) {
-  const tracked = {
-    answered: false,
-    response: Promise.resolve(request).then((res) => ((tracked.answered = true), res)),
-  }
+function send<T>(request: PromiseLike<T>): { answered: boolean; response: Promise<T> } {
+  const tracked = { answered: false, response: Promise.resolve(request) }
+  tracked.response = tracked.response.then((res) => {
+    tracked.answered = true
+    return res
+  })
   return tracked
 }
 

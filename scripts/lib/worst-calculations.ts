@@ -45,17 +45,17 @@ function longestBatten(units: UnitSystem) {
 }
 
 /**
- * The most items, half of them spread, at positions and weights with as many digits as a double carries,
- * weighing `total` together.
+ * The most items, weighing `total` together, with figures as long as a double carries. Spreads that cross every
+ * line cost the engine most (each span carries a piece of each), so most items are such spreads; every tenth is
+ * a point load.
  */
 function manyItems(length: number, total: number) {
   const next = numbers(11)
   const raw = Array.from({ length: COUNT_RANGES.items.max }, (_, k): Item => {
-    const a = next() * length
-    const b = next() * length
-    return k % 2 === 1
-      ? { label: `run ${k}`, weightPerLength: next(), from: Math.min(a, b), to: Math.max(a, b) }
-      : { label: `fixture ${k}`, weight: next(), at: a }
+    if (k % 10 === 9) return { label: `fixture ${k}`, weight: next(), at: next() * length }
+    const from = next() * length * 0.05
+    const to = length - next() * length * 0.05
+    return { label: `run ${k}`, weightPerLength: next(), from, to }
   })
   const rawTotal = raw.reduce(
     (sum, item) => sum + ('weight' in item ? item.weight : item.weightPerLength * (item.to - item.from)),

@@ -53,13 +53,13 @@ const bricks = [
 ]
 
 const TARGET_MS = 100
-const slowest: Array<{ name: string; p95: number }> = []
+const slowest: Array<{ name: string; median: number; p95: number }> = []
 
 function report(name: string, times: number[]) {
   times.sort((a, b) => a - b)
   const median = times[Math.floor(times.length / 2)]!
   const p95 = times[Math.floor(times.length * 0.95)]!
-  slowest.push({ name, p95 })
+  slowest.push({ name, median, p95 })
   console.log(`${name.padEnd(64)} median ${median.toFixed(3)} ms   p95 ${p95.toFixed(3)} ms`)
 }
 
@@ -128,9 +128,13 @@ const balance = live.useLiveBalance({
 })
 balance.rows.value = scene.rows
 let keystroke = 0
+// A point row's weight: a figure the sum reads, so every keystroke recomputes it.
+const typedRow = balance.rows.value.findIndex((row) => row.kind === 'point')
 const type = (text: (n: number) => string) => () => {
-  balance.rows.value[0]!.weight = text(keystroke++)
-  return [balance.result.value, balance.rowMessages.value, balance.otherProblems.value]
+  balance.rows.value[typedRow]!.weight = text(keystroke++)
+  const shown = [balance.result.value, balance.rowMessages.value, balance.otherProblems.value]
+  if (!shown[0] && !Object.keys(shown[1] as object).length) throw new Error('the live panel worked nothing out')
+  return shown
 }
 measure(
   'live panel, worst lineset and 250 rows, a keystroke',
@@ -145,8 +149,10 @@ measure(
   10,
 )
 
-const worst = slowest.reduce((a, b) => (b.p95 > a.p95 ? b : a))
+// "Well under" the target: the median at most half of it. The p95 also carries whatever else the machine runs.
+const worst = slowest.reduce((a, b) => (b.median > a.median ? b : a))
 console.log(
-  `\nWorst case: ${worst.name}, p95 ${worst.p95.toFixed(1)} ms (target: well under ${TARGET_MS} ms)` +
-    (worst.p95 < TARGET_MS ? '' : '  ** OVER TARGET **'),
+  `\nWorst case: ${worst.name}, median ${worst.median.toFixed(1)} ms, p95 ${worst.p95.toFixed(1)} ms ` +
+    `(target: well under ${TARGET_MS} ms)` +
+    (worst.median <= TARGET_MS / 2 ? '' : '  ** OVER TARGET **'),
 )

@@ -12,6 +12,7 @@ import { noStore, securityHeaders } from './http/headers.js'
 import { mountedRoutes, type MountedRoute } from './http/mounted-routes.js'
 import { sessionMiddleware } from './http/session.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
+import { createCalculationPool, type CalculationPool } from './modules/calculations/calculation-pool.js'
 import { calculationRoutes } from './modules/calculations/calculation.routes.js'
 import { invitationRoutes } from './modules/invitations/invitation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
@@ -27,6 +28,8 @@ export interface AppHandle {
   context: AppContext
   /** Every API route mounted, as `METHOD /api/v1/path` (the role table is checked against it). */
   routes: MountedRoute[]
+  /** The thread the engine runs on (tests hold it to keep a calculation in flight). */
+  calculations: CalculationPool
   close(): Promise<void>
 }
 
@@ -45,6 +48,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
   const sessions = sessionMiddleware(config, connections.sessionPool)
   const passport = createPassport(context)
   const csrf = csrfProtection(config)
+  const calculations = createCalculationPool()
   const app = express()
 
   app.set('trust proxy', config.trustProxy)
@@ -64,7 +68,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/brick-types', brickTypeRoutes(context)],
     ['/people', peopleRoutes(context)],
     ['/invitations', invitationRoutes(context, csrf)],
-    ['/calculations', calculationRoutes()],
+    ['/calculations', calculationRoutes(calculations)],
   ] as const
   for (const [path, router] of mounts) api.use(path, router)
   api.use(apiNotFound)
@@ -84,7 +88,9 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     db,
     context,
     routes: mountedRoutes('/api/v1', mounts),
+    calculations,
     close: async () => {
+      await calculations.close()
       await sessions.close()
       await context.mail.close()
       await connections.close()

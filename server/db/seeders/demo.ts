@@ -1,6 +1,6 @@
 import bcrypt from 'bcryptjs'
-import { brickTypeInputSchema } from '../../../shared/schemas/brick-type.js'
-import { linesetInputSchema } from '../../../shared/schemas/lineset.js'
+import { brickTypeInputSchemaFor } from '../../../shared/schemas/brick-type.js'
+import { linesetInputSchemaFor } from '../../../shared/schemas/lineset.js'
 import type { SessionUser } from '../../../shared/schemas/session.js'
 import type { AppContext } from '../../context.js'
 import { createBrickType } from '../../modules/brick-types/brick-type.service.js'
@@ -37,8 +37,10 @@ export async function seedDemoIfEmpty(app: AppContext): Promise<boolean> {
     }
     const asAdministrator = { ...app, actor: administrator!, transaction }
     // Demo data obeys the same contract as the forms.
-    for (const lineset of DEMO_LINESETS) await createLineset(asAdministrator, linesetInputSchema.parse(lineset))
-    for (const brick of DEMO_BRICK_TYPES) await createBrickType(asAdministrator, brickTypeInputSchema.parse(brick))
+    for (const lineset of DEMO_LINESETS)
+      await createLineset(asAdministrator, linesetInputSchemaFor('imperial').parse(lineset))
+    for (const brick of DEMO_BRICK_TYPES)
+      await createBrickType(asAdministrator, brickTypeInputSchemaFor('imperial').parse(brick))
   })
   return true
 }

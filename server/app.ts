@@ -12,6 +12,7 @@ import { noStore, securityHeaders } from './http/headers.js'
 import { mountedRoutes, type MountedRoute } from './http/mounted-routes.js'
 import { sessionMiddleware } from './http/session.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
+import { createCalculationPool, type CalculationPool } from './modules/calculations/calculation-pool.js'
 import { calculationRoutes } from './modules/calculations/calculation.routes.js'
 import { itemTypeRoutes } from './modules/item-types/item-type.routes.js'
 import { hangRoutes } from './modules/hangs/hang.routes.js'
@@ -30,6 +31,8 @@ export interface AppHandle {
   context: AppContext
   /** Every API route mounted, as `METHOD /api/v1/path` (the role table is checked against it). */
   routes: MountedRoute[]
+  /** The thread the engine runs on (tests hold it to keep a calculation in flight). */
+  calculations: CalculationPool
   close(): Promise<void>
 }
 
@@ -48,6 +51,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
   const sessions = sessionMiddleware(config, connections.sessionPool)
   const passport = createPassport(context)
   const csrf = csrfProtection(config)
+  const calculations = createCalculationPool()
   const app = express()
 
   app.set('trust proxy', config.trustProxy)
@@ -70,7 +74,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/productions', productionRoutes(context)],
     ['/people', peopleRoutes(context)],
     ['/invitations', invitationRoutes(context, csrf)],
-    ['/calculations', calculationRoutes()],
+    ['/calculations', calculationRoutes(calculations)],
   ] as const
   for (const [path, router] of mounts) api.use(path, router)
   api.use(apiNotFound)
@@ -90,7 +94,9 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     db,
     context,
     routes: mountedRoutes('/api/v1', mounts),
+    calculations,
     close: async () => {
+      await calculations.close()
       await sessions.close()
       await context.mail.close()
       await connections.close()

@@ -1,6 +1,8 @@
 import type { RequestHandler } from 'express'
 import type { ZodType } from 'zod'
 import { validationErrorBody } from '../../shared/errors/fields.js'
+import { unitsTypedIn } from '../../shared/schemas/quantity.js'
+import type { UnitSystem } from '../../shared/units/systems.js'
 import { AppError } from './errors.js'
 
 interface Schemas {
@@ -33,4 +35,13 @@ export function validate(schemas: Schemas): RequestHandler {
     }
     next()
   }
+}
+
+/**
+ * Validates a body whose figures carry the units they were typed in (`unitSystem`) with the shared schema for
+ * those units, since the units set each figure's range (40 is a fine batten length in feet and an impossible
+ * one in metres). Whether those are still the venue's units is the service's check (409 `units_changed`).
+ */
+export function validateByUnitsTypedIn(schemaFor: (units: UnitSystem) => ZodType): RequestHandler {
+  return (req, res, next) => validate({ body: schemaFor(unitsTypedIn(req.body)) })(req, res, next)
 }

@@ -19,13 +19,17 @@ export interface BrickPlan {
   stackUsed: Decimal
   bricks: number
   complete: boolean
+  /** Partial plans tried: never more than {@link BRICK_PLAN_WORK_LIMIT}. */
+  work: number
 }
 
 /**
  * How many partial plans the search may try. Ordinary stocks finish in a few thousand; this bound keeps an
  * unusual stock (many types with many-decimal weights) from holding a request or a keystroke for seconds.
+ * Every step of the search is a partial plan tried, counting loops included, so the bound holds whatever
+ * the figures (a count of a million bricks costs no more than a count of ten).
  */
-export const BRICK_PLAN_WORK_LIMIT = 200_000
+export const BRICK_PLAN_WORK_LIMIT = 100_000
 
 interface Scaled {
   weight: number
@@ -67,11 +71,18 @@ export function planBricks(stock: readonly BrickStock[], limit: Decimal.Value, s
   best.counts.forEach((count, k) => (counts[types[k]!.index] = count))
   const loaded = stock.reduce((sum, b, i) => sum.plus(Dec(b.weight).times(counts[i]!)), Dec(0))
   const stackUsed = stock.reduce((sum, b, i) => sum.plus(Dec(b.thickness).times(counts[i]!)), Dec(0))
-  return { counts, loaded, stackUsed, bricks: counts.reduce((a, b) => a + b, 0), complete: best.complete }
+  const bricks = counts.reduce((a, b) => a + b, 0)
+  return { counts, loaded, stackUsed, bricks, complete: best.complete, work: best.work }
 }
 
+/**
+ * Euclid's algorithm as a loop, on safe integers only (the schema's ranges and six decimals keep every scaled
+ * figure one); anything else answers 1, which only makes the search a little less quick.
+ */
 function greatestCommonDivisor(a: number, b: number): number {
-  return b === 0 ? a : greatestCommonDivisor(b, a % b)
+  if (!Number.isSafeInteger(a) || !Number.isSafeInteger(b)) return 1
+  while (b !== 0) [a, b] = [b, a % b]
+  return a
 }
 
 function search(types: Scaled[], limit: number, stackRoom: number) {
@@ -88,8 +99,9 @@ function search(types: Scaled[], limit: number, stackRoom: number) {
   let bestCounts: number[] = []
   const counts: number[] = new Array(n).fill(0)
   let work = 0
+  let stopped = false
   const visit = (i: number, weight: number, stackLeft: number, count: number): void => {
-    if (++work > BRICK_PLAN_WORK_LIMIT) return
+    work++
     if (weight > bestWeight || (weight === bestWeight && count < bestCount)) {
       bestWeight = weight
       bestCount = count
@@ -104,11 +116,16 @@ function search(types: Scaled[], limit: number, stackRoom: number) {
     const most = Math.min(t.available, Math.floor((limit - weight) / t.weight), Math.floor(stackLeft / t.thickness))
     const least = i === n - 1 ? most : 0
     for (let c = most; c >= least; c--) {
+      // Each count tried is one partial plan: stop the moment the budget is spent, not at the loop's end.
+      if (work >= BRICK_PLAN_WORK_LIMIT) {
+        stopped = true
+        break
+      }
       counts[i] = c
       visit(i + 1, weight + c * t.weight, stackLeft - c * t.thickness, count + c)
     }
     counts[i] = 0
   }
   visit(0, 0, stackRoom, 0)
-  return { counts: bestCounts, complete: work <= BRICK_PLAN_WORK_LIMIT }
+  return { counts: bestCounts, complete: !stopped, work }
 }

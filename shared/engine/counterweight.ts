@@ -26,6 +26,8 @@ export interface CounterweightFigures {
   arborSide: Decimal
   outOfBalance: Decimal
   checks: Check[]
+  /** Partial plans the brick searches tried, together: at most two plans' worth of BRICK_PLAN_WORK_LIMIT. */
+  work: number
 }
 
 /**
@@ -58,7 +60,8 @@ export function balanceCounterweight(request: CounterweightRequest): Counterweig
         `The arbor needs ${weight(required)} of bricks but takes only ${weight(room)} more (capacity ${weight(arbor.capacity)}${aboard.isZero() ? '' : `, ${weight(aboard)} of pipe weight already aboard`})`,
       ),
     )
-  if (required.lt(0) && outOfBalance.abs().gt(tolerance))
+  const emptyTooHeavy = required.lt(0) && outOfBalance.abs().gt(tolerance)
+  if (emptyTooHeavy)
     checks.push(
       check(
         'arbor-heavy-empty',
@@ -66,8 +69,12 @@ export function balanceCounterweight(request: CounterweightRequest): Counterweig
         `Even with no bricks the arbor side is ${weight(outOfBalance.neg())} heavier than the batten side at the batten; add weight to the batten or lighten the arbor before the set moves`,
       ),
     )
-  else if (outOfBalance.gt(tolerance))
-    checks.push(shortfallCheck(request, required, room, stackRoom, plan, outOfBalance, weight))
+  let work = plan.work
+  if (!emptyTooHeavy && outOfBalance.gt(tolerance)) {
+    const shortfall = shortfallCheck(request, required, room, stackRoom, plan, outOfBalance, weight)
+    checks.push(shortfall.check)
+    work += shortfall.work
+  }
   if (!plan.complete)
     checks.push(
       check(
@@ -84,7 +91,7 @@ export function balanceCounterweight(request: CounterweightRequest): Counterweig
         `Out of balance by ${weight(outOfBalance)}, more than the rope lock's holding figure of ${weight(request.ropeLockHolding)}; the lock is not a brake`,
       ),
     )
-  return { required, plan, arborSide, outOfBalance, checks }
+  return { required, plan, arborSide, outOfBalance, checks, work }
 }
 
 /** Why the plan falls short: the stock, the stack or the capacity (danger), or only the brick sizes (caution). */
@@ -96,21 +103,34 @@ function shortfallCheck(
   plan: BrickPlan,
   outOfBalance: Decimal,
   weight: (v: Decimal.Value) => string,
-): Check {
-  const unlimited = request.bricks.map((b) => ({ ...b, available: Dec(required).div(b.weight).ceil().toNumber() + 1 }))
-  const relaxed = planBricks(unlimited, required, Dec(10).pow(12))
+): { check: Check; work: number } {
   const heavy = `the set stays ${weight(outOfBalance)} batten heavy, beyond the tolerance of ${weight(request.tolerance)}`
+  const short = (cause: string) =>
+    check(
+      'counterweight-short',
+      'danger',
+      `The arbor needs ${weight(required)} of bricks but ${cause} allows only ${weight(plan.loaded)}: ${heavy}`,
+    )
+  // Past the capacity no stock or stack could help, so there is nothing to search for.
+  if (required.gt(room)) return { check: short('the arbor capacity'), work: 0 }
+  const relaxed = relaxedPlan(request.bricks, required)
+  const { work } = relaxed
   // Only a finished search proves the sizes are the limit; otherwise say the stock may be short (danger).
   if (relaxed.complete && !plan.loaded.lt(relaxed.loaded))
-    return check('out-of-balance', 'caution', `The brick sizes cannot come closer: ${heavy}`)
-  const cause = required.gt(room)
-    ? 'the arbor capacity'
-    : relaxed.stackUsed.gt(stackRoom)
-      ? `the stack length (${formatQuantity(stackRoom, 'shortLength', request.units)} free)`
-      : 'the bricks in stock'
-  return check(
-    'counterweight-short',
-    'danger',
-    `The arbor needs ${weight(required)} of bricks but ${cause} allows only ${weight(plan.loaded)}: ${heavy}`,
-  )
+    return { check: check('out-of-balance', 'caution', `The brick sizes cannot come closer: ${heavy}`), work }
+  const cause = relaxed.stackUsed.gt(stackRoom)
+    ? `the stack length (${formatQuantity(stackRoom, 'shortLength', request.units)} free)`
+    : 'the bricks in stock'
+  return { check: short(cause), work }
+}
+
+/**
+ * The closest plan with every type in ample stock and a stack that cannot run out, to tell the sizes apart
+ * from the stock and the stack. Bounded: the requirement is within the arbor's capacity here, so no type needs
+ * more than requirement ÷ its weight, and the stack room is what all those bricks would take.
+ */
+function relaxedPlan(bricks: readonly BrickStock[], required: Decimal): BrickPlan {
+  const ample = bricks.map((b) => ({ ...b, available: Dec(required).div(b.weight).floor().toNumber() + 1 }))
+  const stack = ample.reduce((sum, b) => sum.plus(Dec(b.thickness).times(b.available)), Dec(0))
+  return planBricks(ample, required, stack)
 }

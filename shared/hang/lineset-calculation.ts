@@ -3,6 +3,7 @@ import type { BrickType } from '../schemas/brick-type.js'
 import type { CalculationInput } from '../schemas/calculation.js'
 import { isCounterweightKind, isHempKind, type Lineset } from '../schemas/lineset.js'
 import type { Venue } from '../schemas/venue.js'
+import { figureRange } from '../schemas/quantity.js'
 
 /** One thing hung on a batten: at a point, or spread over a stretch (the whole batten when from/to are left out). */
 export type HangItem =
@@ -57,8 +58,8 @@ export function linesetCalculationInput(options: {
     input.arbor = {
       emptyWeight: lineset.arborEmptyWeight,
       capacity: lineset.arborCapacity,
-      // Without a stack length the stack is not what limits the plan; the capacity still does.
-      stackLength: lineset.arborStackLength ?? Number.MAX_SAFE_INTEGER,
+      // Without a stack length the stack is not what limits the plan (the longest stack there is); the capacity still does.
+      stackLength: lineset.arborStackLength ?? figureRange('arborStackLength', venue.unitSystem).max,
     }
     if (present(lineset.pipeWeight)) input.pipeWeightAboard = lineset.pipeWeight
     // Until venue-wide stock lands, every brick the house owns counts as free.

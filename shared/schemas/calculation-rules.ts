@@ -1,4 +1,5 @@
 import type * as z from 'zod'
+import { pickPointProblems, SINGLE_LINE_HEMP_RULE, wrongLineCount } from './batten-rules.js'
 
 /** The parts of a parsed input the cross-field rules read. */
 interface RuleInput {
@@ -16,21 +17,8 @@ function fail(ctx: Context, path: Array<string | number>, message: string): void
 }
 
 function checkBatten(input: RuleInput, ctx: Context): void {
-  const { length, pickPoints } = input.batten
-  pickPoints.forEach((at, index) => {
-    const path = ['batten', 'pickPoints', index]
-    if (at > length) fail(ctx, path, `Pick point at ${at} is beyond the batten's length of ${length}`)
-    else if (index > 0 && at <= pickPoints[index - 1]!) {
-      const previous = pickPoints[index - 1]!
-      fail(
-        ctx,
-        path,
-        at === previous
-          ? `Pick point at ${at} is repeated`
-          : `Pick points must be in order from one end: ${at} comes after ${previous}`,
-      )
-    }
-  })
+  for (const { index, message } of pickPointProblems(input.batten.pickPoints, input.batten.length))
+    fail(ctx, ['batten', 'pickPoints', index], message)
   if (input.batten.weightPerLength === undefined && input.batten.pipeSize === undefined)
     fail(ctx, ['batten', 'weightPerLength'], 'Batten weight per length is required when no pipe size is chosen')
   if (input.batten.pipe && input.batten.pipeSize)
@@ -67,8 +55,8 @@ function checkItems(input: RuleInput, ctx: Context): void {
 }
 
 function checkKind(input: RuleInput, ctx: Context): void {
-  if (input.kind === 'hemp-single' && input.batten.pickPoints.length !== 1)
-    fail(ctx, ['batten', 'pickPoints'], 'A single-line hemp set has exactly one pick point')
+  if (wrongLineCount(input.kind, input.batten.pickPoints.length))
+    fail(ctx, ['batten', 'pickPoints'], SINGLE_LINE_HEMP_RULE)
   if (input.kind.startsWith('counterweight') && !input.arbor)
     fail(ctx, ['arbor'], 'A counterweight set needs its arbor (empty weight, capacity, stack length)')
   if (input.kind === 'motorized' && !input.hoist)

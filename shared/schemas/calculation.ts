@@ -1,8 +1,11 @@
 import * as z from 'zod'
-import { UNIT_SYSTEMS } from '../units/index.js'
+import type { UnitSystem } from '../units/index.js'
 import { PIPE_SIZE_KEYS } from '../engine/pipes.js'
 import { checkCalculationInput } from './calculation-rules.js'
-import { LINESET_KINDS } from './lineset.js'
+import { LINESET_KINDS, MAX_PICK_POINTS } from './lineset.js'
+import { count, designFactor, figure } from './quantity.js'
+import { COUNT_RANGES } from './ranges.js'
+import { singleLineText } from './text.js'
 
 export type { CalculationResult } from './calculation-result.js'
 
@@ -10,101 +13,97 @@ export type { CalculationResult } from './calculation-result.js'
 export { LINESET_KINDS, type LinesetKind } from './lineset.js'
 
 /** The most items one batten may carry in a single calculation. */
-export const MAX_ITEMS = 1000
+export const MAX_ITEMS = COUNT_RANGES.items.max
+/** The most brick types one calculation may weigh. */
+export const MAX_BRICK_TYPES = COUNT_RANGES.brickTypes.max
 
-function number(name: string) {
-  return z.number({
-    error: (issue) => (issue.input === undefined ? `${name} is required` : `${name} must be a finite number`),
+/** The input's fields with every figure held to its range in `units`, the units the input says it is in. */
+function inputFields(units: UnitSystem) {
+  const f = (name: Parameters<typeof figure>[0], label: string) => figure(name, units, label)
+  const pipe = z.strictObject({
+    momentOfInertia: f('momentOfInertia', 'Moment of inertia'),
+    sectionModulus: f('sectionModulus', 'Section modulus'),
+    elasticModulus: f('elasticModulus', 'Elastic modulus').optional(),
+    yieldStrength: f('yieldStrength', 'Yield strength').optional(),
+  })
+  const batten = z.strictObject({
+    length: f('battenLength', 'Batten length'),
+    weightPerLength: f('pipeWeightPerLength', 'Batten weight per length').optional(),
+    pickPoints: z
+      .array(f('position', 'Pick point'), { error: 'Pick points must be a list of positions' })
+      .min(1, 'At least one pick point (lift line) is required')
+      .max(MAX_PICK_POINTS, `At most ${MAX_PICK_POINTS} pick points are supported`),
+    pipeSize: z
+      .enum(PIPE_SIZE_KEYS as [string, ...string[]], { error: `Pipe size must be one of ${PIPE_SIZE_KEYS.join(', ')}` })
+      .optional(),
+    pipe: pipe.optional(),
+  })
+  const item = z.strictObject({
+    label: singleLineText('Label', 200).optional(),
+    weight: f('itemWeight', 'Item weight').optional(),
+    at: f('position', 'Item position').optional(),
+    weightPerLength: f('itemWeightPerLength', 'Item weight per length').optional(),
+    from: f('position', 'Start of the span').optional(),
+    to: f('position', 'End of the span').optional(),
+  })
+  const brick = z.strictObject({
+    name: singleLineText('Brick name', 80, { required: true }),
+    weight: f('brickWeight', 'Brick weight'),
+    thickness: f('brickThickness', 'Brick thickness'),
+    available: count('bricks', 'Bricks available'),
+  })
+  return z.strictObject({
+    units: z.literal(units),
+    kind: z.enum(LINESET_KINDS, { error: `Kind must be one of ${LINESET_KINDS.join(', ')}` }),
+    batten,
+    items: z.array(item).max(MAX_ITEMS, `At most ${MAX_ITEMS} items can hang on one batten`).default([]),
+    hardwareWeight: f('itemWeight', 'Hardware weight').optional(),
+    arbor: z
+      .strictObject({
+        emptyWeight: f('arborEmptyWeight', 'Arbor empty weight'),
+        capacity: f('arborCapacity', 'Arbor capacity'),
+        stackLength: f('arborStackLength', 'Arbor stack length'),
+        stackUsed: f('arborStackLength', 'Stack length already used').optional(),
+      })
+      .optional(),
+    bricks: z.array(brick).max(MAX_BRICK_TYPES, `At most ${MAX_BRICK_TYPES} brick types`).optional(),
+    pipeWeightAboard: f('pipeWeightAboard', 'Pipe weight aboard').optional(),
+    liftLine: z
+      .strictObject({
+        weightPerLength: f('liftLineWeightPerLength', 'Lift line weight per length').optional(),
+        breakingStrength: f('ratedLoad', 'Breaking strength').optional(),
+        designFactor: designFactor('Design factor').optional(),
+      })
+      .optional(),
+    tolerance: f('tolerance', 'Tolerance').optional(),
+    ratedLoad: f('ratedLoad', 'Rated load').optional(),
+    travel: f('travel', 'Travel').optional(),
+    trims: z.strictObject({ in: f('travel', 'In trim'), out: f('travel', 'Out trim') }).optional(),
+    sandbag: z.strictObject({ weight: f('sandbagWeight', 'Sandbag weight') }).optional(),
+    spotLine: z.strictObject({ blockRating: f('ratedLoad', 'Block rating') }).optional(),
+    hoist: z
+      .strictObject({
+        ratedCapacity: f('ratedLoad', 'Hoist rated capacity'),
+        counterweightAssist: f('itemWeight', 'Counterweight assist').optional(),
+      })
+      .optional(),
+    ropeLockHolding: f('ropeLockHolding', 'Rope lock holding').optional(),
   })
 }
-const atLeastZero = (name: string) => number(name).min(0, `${name} cannot be negative`)
-const aboveZero = (name: string) => number(name).positive(`${name} must be more than zero`)
 
-const pipeSchema = z.strictObject({
-  momentOfInertia: aboveZero('Moment of inertia'),
-  sectionModulus: aboveZero('Section modulus'),
-  elasticModulus: aboveZero('Elastic modulus').optional(),
-  yieldStrength: aboveZero('Yield strength').optional(),
-})
-
-const battenSchema = z.strictObject({
-  length: aboveZero('Batten length'),
-  weightPerLength: atLeastZero('Batten weight per length').optional(),
-  pickPoints: z
-    .array(atLeastZero('Pick point'), { error: 'Pick points must be a list of positions' })
-    .min(1, 'At least one pick point (lift line) is required')
-    .max(24, 'At most 24 pick points are supported'),
-  pipeSize: z
-    .enum(PIPE_SIZE_KEYS as [string, ...string[]], { error: `Pipe size must be one of ${PIPE_SIZE_KEYS.join(', ')}` })
-    .optional(),
-  pipe: pipeSchema.optional(),
-})
-
-const itemSchema = z.strictObject({
-  label: z.string({ error: 'Label must be text' }).max(200, 'Label is too long (200 characters at most)').optional(),
-  weight: atLeastZero('Item weight').optional(),
-  at: atLeastZero('Item position').optional(),
-  weightPerLength: atLeastZero('Item weight per length').optional(),
-  from: atLeastZero('Start of the span').optional(),
-  to: atLeastZero('End of the span').optional(),
-})
-
-const brickSchema = z.strictObject({
-  name: z
-    .string({ error: 'Brick name must be text' })
-    .min(1, 'Brick name is required')
-    .max(80, 'Brick name is too long'),
-  weight: aboveZero('Brick weight'),
-  thickness: aboveZero('Brick thickness'),
-  available: atLeastZero('Bricks available').int('Bricks available must be a whole number'),
-})
-
-const baseSchema = z.strictObject({
-  units: z.enum(UNIT_SYSTEMS, { error: 'Units must be "imperial" or "metric"' }),
-  kind: z.enum(LINESET_KINDS, { error: `Kind must be one of ${LINESET_KINDS.join(', ')}` }),
-  batten: battenSchema,
-  items: z.array(itemSchema).max(MAX_ITEMS, `At most ${MAX_ITEMS} items can hang on one batten`).default([]),
-  hardwareWeight: atLeastZero('Hardware weight').optional(),
-  arbor: z
-    .strictObject({
-      emptyWeight: atLeastZero('Arbor empty weight'),
-      capacity: aboveZero('Arbor capacity'),
-      stackLength: aboveZero('Arbor stack length'),
-      stackUsed: atLeastZero('Stack length already used').optional(),
-    })
-    .optional(),
-  bricks: z.array(brickSchema).max(20, 'At most 20 brick types').optional(),
-  pipeWeightAboard: atLeastZero('Pipe weight aboard').optional(),
-  liftLine: z
-    .strictObject({
-      weightPerLength: atLeastZero('Lift line weight per length').optional(),
-      breakingStrength: aboveZero('Breaking strength').optional(),
-      designFactor: aboveZero('Design factor').optional(),
-    })
-    .optional(),
-  tolerance: atLeastZero('Tolerance').optional(),
-  ratedLoad: aboveZero('Rated load').optional(),
-  travel: atLeastZero('Travel').optional(),
-  trims: z.strictObject({ in: atLeastZero('In trim'), out: atLeastZero('Out trim') }).optional(),
-  sandbag: z.strictObject({ weight: atLeastZero('Sandbag weight') }).optional(),
-  spotLine: z.strictObject({ blockRating: aboveZero('Block rating') }).optional(),
-  hoist: z
-    .strictObject({
-      ratedCapacity: aboveZero('Hoist rated capacity'),
-      counterweightAssist: atLeastZero('Counterweight assist').optional(),
-    })
-    .optional(),
-  ropeLockHolding: atLeastZero('Rope lock holding').optional(),
-})
+const inUnits = (units: UnitSystem) => inputFields(units).superRefine(checkCalculationInput)
 
 /**
  * The contract of the CLI and the API: one lineset and what hangs on it.
- * Lengths are measured from one end of the batten; figures are in the input's units.
+ * Lengths are measured from one end of the batten; figures are in the input's units, which set their ranges.
  *
  * @example
  * calculationInputSchema.safeParse({ units: 'imperial', kind: 'hemp-single',
  *   batten: { length: 4, weightPerLength: 1, pickPoints: [2] } }).success // true
  */
-export const calculationInputSchema = baseSchema.superRefine(checkCalculationInput)
+export const calculationInputSchema = z.discriminatedUnion('units', [inUnits('imperial'), inUnits('metric')], {
+  error: (issue) => (issue.code === 'invalid_union' ? 'Units must be "imperial" or "metric"' : undefined),
+})
 
-export type CalculationInput = z.infer<typeof calculationInputSchema>
+/** A parsed calculation input, in either unit system. */
+export type CalculationInput = Omit<z.infer<ReturnType<typeof inputFields>>, 'units'> & { units: UnitSystem }

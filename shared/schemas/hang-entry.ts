@@ -1,108 +1,118 @@
 import { z } from 'zod'
 import type { HangEntry } from '../hang/hang-items.js'
+import type { UnitSystem } from '../units/systems.js'
 import { itemCategoryField } from './item-type.js'
-import { plainText } from './plain-text.js'
-import { nonNegative, positive } from './quantity.js'
+import { count, figure } from './quantity.js'
+import { singleLineText } from './text.js'
 
-/** The most units one entry may stand for (a batten carries at most 1,000 loads in all). */
-export const MAX_ENTRY_QUANTITY = 1000
 /** The most pick points a piece of scenery may hang from. */
 export const MAX_OWN_PICK_POINTS = 24
+// Fabric is sold from light scrim (a few oz per running yard) to the heaviest velour (about 35 oz).
+const GRADE = { min: 0.1, max: 200 }
+// Fullness beyond 300 % is not hung; 1,000 % leaves room for any effect.
+const FULLNESS = { min: 0, max: 1000 }
 
-const labelled = {
-  label: plainText(120, { required: true }),
-  category: itemCategoryField(),
-}
-const quantity = () =>
+const bounded = (label: string, { min, max }: { min: number; max: number }, unit: string) =>
   z
-    .number({ error: 'Enter a number' })
-    .int('Must be a whole number')
-    .min(1, 'At least 1')
-    .max(MAX_ENTRY_QUANTITY, `At most ${MAX_ENTRY_QUANTITY}`)
+    .number({ error: `${label} must be a number` })
+    .min(min, `${label} must be between ${min} and ${max}${unit}`)
+    .max(max, `${label} must be between ${min} and ${max}${unit}`)
 
 /** A stretch runs from one end toward the other: `to` beyond `from`. */
 const forwardStretch = (value: { from?: number; to?: number }, ctx: z.RefinementCtx) => {
   if (value.from !== undefined && value.to !== undefined && value.to <= value.from)
-    ctx.addIssue({ code: 'custom', path: ['to'], message: 'Must be beyond the start of the stretch' })
+    ctx.addIssue({ code: 'custom', path: ['to'], message: 'The end of the stretch must be beyond its start' })
 }
 
-const pointEntry = z.strictObject({
-  ...labelled,
-  weight: nonNegative(),
-  at: nonNegative(),
-  quantity: quantity().default(1),
-})
-
-const stretchEntry = z
-  .strictObject({ ...labelled, weightPerLength: nonNegative(), from: nonNegative(), to: nonNegative() })
-  .superRefine(forwardStretch)
-
-const fabric = z
-  .strictObject({
-    gradeOzPerLinearYard: positive().optional(),
-    weightPerArea: positive().optional(),
-    height: positive(),
-    fullnessPercent: nonNegative(),
-  })
-  .superRefine((value, ctx) => {
-    if ((value.gradeOzPerLinearYard === undefined) === (value.weightPerArea === undefined))
-      ctx.addIssue({
-        code: 'custom',
-        path: ['gradeOzPerLinearYard'],
-        message: 'Give the fabric grade or its weight per area, not both',
-      })
-  })
-const fabricEntry = z
-  .strictObject({ ...labelled, fabric, from: nonNegative(), to: nonNegative() })
-  .superRefine(forwardStretch)
-
-const libraryEntry = z
-  .strictObject({
+function entryShapes(units: UnitSystem) {
+  const labelled = { label: singleLineText('Label', 120, { required: true }), category: itemCategoryField() }
+  const weight = () => figure('itemWeight', units, 'Weight')
+  const position = (label: string) => figure('position', units, label)
+  const quantity = () => count('entryQuantity', 'Quantity')
+  const point = z.strictObject({
     ...labelled,
-    itemTypeId: z.uuid({ error: 'Choose an item from the library' }),
-    quantity: quantity(),
-    at: nonNegative().optional(),
-    from: nonNegative().optional(),
-    to: nonNegative().optional(),
+    weight: weight(),
+    at: position('Position'),
+    quantity: quantity().default(1),
   })
-  .superRefine((value, ctx) => {
-    const atPoint = value.at !== undefined
-    const alongStretch = value.from !== undefined || value.to !== undefined
-    if (atPoint === alongStretch)
-      ctx.addIssue({ code: 'custom', path: ['at'], message: 'Give a point, or a stretch from and to, not both' })
-    else if (alongStretch && (value.from === undefined || value.to === undefined))
-      ctx.addIssue({ code: 'custom', path: [value.from === undefined ? 'from' : 'to'], message: 'Enter a number' })
-    forwardStretch(value, ctx)
+  const stretch = z
+    .strictObject({
+      ...labelled,
+      weightPerLength: figure('itemWeightPerLength', units, 'Weight per length'),
+      from: position('Start of the stretch'),
+      to: position('End of the stretch'),
+    })
+    .superRefine(forwardStretch)
+  const fabric = z
+    .strictObject({
+      gradeOzPerLinearYard: bounded('Fabric grade', GRADE, ' oz per running yard').optional(),
+      weightPerArea: figure('fabricWeightPerArea', units, 'Fabric weight per area').optional(),
+      height: figure('fabricHeight', units, 'Finished height'),
+      fullnessPercent: bounded('Fullness', FULLNESS, ' %'),
+    })
+    .superRefine((value, ctx) => {
+      if ((value.gradeOzPerLinearYard === undefined) === (value.weightPerArea === undefined))
+        ctx.addIssue({
+          code: 'custom',
+          path: ['gradeOzPerLinearYard'],
+          message: 'Give the fabric grade or its weight per area, not both',
+        })
+    })
+  const softGoods = z
+    .strictObject({ ...labelled, fabric, from: position('Start of the stretch'), to: position('End of the stretch') })
+    .superRefine(forwardStretch)
+  const library = z
+    .strictObject({
+      ...labelled,
+      itemTypeId: z.uuid({ error: 'Choose an item from the library' }),
+      quantity: quantity(),
+      at: position('Position').optional(),
+      from: position('Start of the stretch').optional(),
+      to: position('End of the stretch').optional(),
+    })
+    .superRefine((value, ctx) => {
+      const atPoint = value.at !== undefined
+      const alongStretch = value.from !== undefined || value.to !== undefined
+      if (atPoint === alongStretch)
+        ctx.addIssue({ code: 'custom', path: ['at'], message: 'Give a point, or a stretch from and to, not both' })
+      else if (alongStretch && (value.from === undefined || value.to === undefined))
+        ctx.addIssue({ code: 'custom', path: [value.from === undefined ? 'from' : 'to'], message: 'Enter a position' })
+      forwardStretch(value, ctx)
+    })
+  const shared = z.strictObject({
+    ...labelled,
+    weight: weight(),
+    points: z
+      .array(position('Pick point'), { error: 'List the pick points' })
+      .min(1, 'At least one pick point')
+      .max(MAX_OWN_PICK_POINTS, `At most ${MAX_OWN_PICK_POINTS} pick points`),
   })
-
-const sharedEntry = z.strictObject({
-  ...labelled,
-  weight: nonNegative(),
-  points: z
-    .array(nonNegative(), { error: 'List the pick points' })
-    .min(1, 'At least one pick point')
-    .max(MAX_OWN_PICK_POINTS, `At most ${MAX_OWN_PICK_POINTS} pick points`),
-})
-
-/** Which shape an entry is, told by the field only that shape has. */
-function shapeOf(value: unknown) {
-  if (!value || typeof value !== 'object') return pointEntry
-  if ('fabric' in value) return fabricEntry
-  if ('itemTypeId' in value) return libraryEntry
-  if ('points' in value) return sharedEntry
-  if ('weightPerLength' in value) return stretchEntry
-  return pointEntry
+  /** Which shape an entry is, told by the field only that shape has. */
+  return (value: unknown) => {
+    if (!value || typeof value !== 'object') return point
+    if ('fabric' in value) return softGoods
+    if ('itemTypeId' in value) return library
+    if ('points' in value) return shared
+    if ('weightPerLength' in value) return stretch
+    return point
+  }
 }
+
+function buildEntry(units: UnitSystem) {
+  const shapeOf = entryShapes(units)
+  return z.unknown().transform((value, ctx): HangEntry => {
+    const parsed = shapeOf(value).safeParse(value)
+    if (parsed.success) return parsed.data as HangEntry
+    for (const issue of parsed.error.issues)
+      ctx.addIssue({ code: 'custom', message: issue.message, path: issue.path as PropertyKey[] })
+    return z.NEVER
+  })
+}
+const entrySchemas = { imperial: buildEntry('imperial'), metric: buildEntry('metric') }
 
 /**
- * One thing a fly operator hangs, in the venue's units: a weight at a point (per unit, `quantity` defaulting
- * to 1), a weight per length along a stretch, soft goods from their fabric, library units at a point or spread
- * evenly along a stretch, or scenery on its own pick points. Refusals name the field within the entry.
+ * One thing a fly operator hangs, in the units typed in (which set the ranges): a weight at a point (per unit,
+ * `quantity` defaulting to 1), a weight per length along a stretch, soft goods from their fabric, library units
+ * at a point or spread evenly along a stretch, or scenery on its own pick points. Refusals name the field.
  */
-export const hangEntrySchema = z.unknown().transform((value, ctx): HangEntry => {
-  const parsed = shapeOf(value).safeParse(value)
-  if (parsed.success) return parsed.data as HangEntry
-  for (const issue of parsed.error.issues)
-    ctx.addIssue({ code: 'custom', message: issue.message, path: issue.path as PropertyKey[] })
-  return z.NEVER
-})
+export const hangEntrySchemaFor = (units: UnitSystem) => entrySchemas[units]

@@ -3,29 +3,28 @@ import type { HangEntry } from '../hang/hang-items.js'
 import type { UnitSystem } from '../units/systems.js'
 import type { CalculationResult } from './calculation-result.js'
 import { MAX_ITEMS } from './calculation.js'
-import { hangEntrySchema } from './hang-entry.js'
-import { plainText } from './plain-text.js'
-import { typedInField } from './quantity.js'
+import { hangEntrySchemaFor } from './hang-entry.js'
+import { count, typedInField } from './quantity.js'
+import { singleLineText } from './text.js'
 
 /**
  * A new revision of a lineset's hang, as the fly operator saves it. `basedOnRevision` is the revision the form
  * started from (`null` for a lineset's first); the server refuses the save when a newer one exists. Any result
  * a client sends is not part of this: the server computes its own.
  */
-export const hangSaveSchema = z.object({
-  title: plainText(120, { required: true }),
-  productionId: z.uuid({ error: 'Choose a production' }).nullable().optional(),
-  basedOnRevision: z
-    .number({ error: 'Say which revision this was based on, or null' })
-    .int('Must be a whole number')
-    .min(1, 'Revisions count from 1')
-    .nullable(),
-  items: z
-    .array(hangEntrySchema, { error: 'List the items' })
-    .max(MAX_ITEMS, `At most ${MAX_ITEMS} items can hang on one batten`),
-  unitSystem: typedInField(),
-})
-export type HangSave = z.infer<typeof hangSaveSchema>
+const hangSaveFields = (units: UnitSystem) =>
+  z.object({
+    title: singleLineText('Title', 120, { required: true }),
+    productionId: z.uuid({ error: 'Choose a production' }).nullable().optional(),
+    basedOnRevision: count('revision', 'Based on revision').nullable(),
+    items: z
+      .array(hangEntrySchemaFor(units), { error: 'List the items' })
+      .max(MAX_ITEMS, `At most ${MAX_ITEMS} items can hang on one batten`),
+    unitSystem: typedInField(),
+  })
+const saveSchemas = { imperial: hangSaveFields('imperial'), metric: hangSaveFields('metric') }
+export const hangSaveSchemaFor = (units: UnitSystem) => saveSchemas[units]
+export type HangSave = z.infer<ReturnType<typeof hangSaveFields>>
 
 /** `/linesets/:id/hangs/:hangId`. */
 export const hangParamsSchema = z.object({ id: z.uuid(), hangId: z.uuid() })

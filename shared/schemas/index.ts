@@ -1,4 +1,6 @@
+export * from './ranges.js'
 export * from './quantity.js'
+export * from './text.js'
 export * from './lineset.js'
 export * from './brick-type.js'
 export * from './venue.js'

@@ -1,5 +1,5 @@
 import { z } from 'zod'
-import { requiredText } from './quantity.js'
+import { singleLineText } from './text.js'
 import type { Role } from './role.js'
 
 /** What an invitation link carries: a long random token, only ever compared by its hash. */
@@ -16,7 +16,7 @@ export const invitationLookupSchema = z.object({ token })
  */
 export const invitationAcceptSchema = z.object({
   token,
-  name: requiredText(120).optional(),
+  name: singleLineText('Name', 120, { required: true }).optional(),
   password: z.string({ error: 'Enter a password' }).min(1, 'Enter a password').max(200).optional(),
 })
 export type InvitationAccept = z.infer<typeof invitationAcceptSchema>

@@ -1,15 +1,10 @@
 import { z } from 'zod'
-import type { Quantity } from '../units/systems.js'
+import type { Quantity, UnitSystem } from '../units/systems.js'
 import type { CurrentHang } from './hang.js'
-import {
-  nonNegative,
-  optionalNonNegative,
-  optionalPositive,
-  positive,
-  requiredText,
-  typedInField,
-  versionField,
-} from './quantity.js'
+import { pickPointProblems, SINGLE_LINE_HEMP_RULE, wrongLineCount } from './batten-rules.js'
+import { count, figure, optionalFigure, typedInField, versionField } from './quantity.js'
+import { COUNT_RANGES } from './ranges.js'
+import { multiLineText, singleLineText } from './text.js'
 
 /** Every kind of lineset a house may have; each is balanced and checked differently. */
 export const LINESET_KINDS = [
@@ -26,67 +21,63 @@ export type LinesetKind = (typeof LINESET_KINDS)[number]
 export const LINESET_STATUSES = ['in-service', 'needs-inspection', 'out-of-service'] as const
 export type LinesetStatus = (typeof LINESET_STATUSES)[number]
 
-export const MAX_PICK_POINTS = 16
+/** The most lift lines one lineset may have (the calculation holds the same limit). */
+export const MAX_PICK_POINTS = COUNT_RANGES.pickPoints.max
 
-/** Whether a set is balanced by bricks on an arbor (single or double purchase). */
 export const isCounterweightKind = (kind: LinesetKind) =>
   kind === 'counterweight-single' || kind === 'counterweight-double'
 
 /** Whether a set is hauled by hand on rope (one line or several), and so may carry a sandbag. */
 export const isHempKind = (kind: LinesetKind) => kind === 'hemp-single' || kind === 'hemp-multi'
 
-/** Pipe choice: a key of the standard pipe table, or `custom` with figures entered by hand. */
-const pipeSize = z.string({ error: 'Choose a pipe size' }).trim().min(1, 'Choose a pipe size').max(40)
+/** The lineset's fields with every figure held to its range in `units`, the venue's unit system. */
+function linesetFields(units: UnitSystem) {
+  const required = (name: Parameters<typeof figure>[0], label: string) => figure(name, units, label)
+  const optional = (name: Parameters<typeof figure>[0], label: string) => optionalFigure(name, units, label)
+  return z.object({
+    number: count('linesetNumber', 'Lineset number'),
+    name: singleLineText('Name', 80, { required: true }),
+    kind: z.enum(LINESET_KINDS, { error: 'Choose a kind of lineset' }),
+    status: z.enum(LINESET_STATUSES, { error: 'Choose a status' }),
+    distanceFromPlasterLine: optional('distanceFromPlasterLine', 'Distance from the plaster line'),
+    battenLength: required('battenLength', 'Batten length'),
+    // A key of the standard pipe table, or `custom` with figures entered by hand.
+    pipeSize: singleLineText('Pipe size', 40, { required: true, emptyMessage: 'Choose a pipe size' }),
+    pipeWeightPerLength: required('pipeWeightPerLength', 'Pipe weight per length'),
+    pipeMomentOfInertia: optional('momentOfInertia', 'Moment of inertia'),
+    pipeSectionModulus: optional('sectionModulus', 'Section modulus'),
+    pickPoints: z
+      .array(required('position', 'Lift line position'), { error: 'List the lift line positions' })
+      .min(1, 'At least one lift line')
+      .max(MAX_PICK_POINTS, `At most ${MAX_PICK_POINTS} lift lines`),
+    liftLineWeightPerLength: optional('liftLineWeightPerLength', 'Lift line weight per length'),
+    liftLineBreakingStrength: optional('ratedLoad', 'Breaking strength'),
+    arborEmptyWeight: optional('arborEmptyWeight', 'Arbor empty weight'),
+    arborCapacity: optional('arborCapacity', 'Arbor capacity'),
+    arborStackLength: optional('arborStackLength', 'Arbor stack length'),
+    ratedLoad: optional('ratedLoad', 'Rated load'),
+    pipeWeight: optional('pipeWeightAboard', 'Pipe weight'),
+    travel: optional('travel', 'Travel'),
+    sandbagWeight: optional('sandbagWeight', 'Sandbag weight'),
+    hoistRatedCapacity: optional('ratedLoad', 'Hoist rated capacity'),
+    hoistSpeed: optional('hoistSpeed', 'Hoist speed'),
+    notes: multiLineText('Notes', 2000).optional(),
+    // The units the figures were typed in; they set each figure's range, and a write whose units the venue
+    // has left since is refused with 409.
+    unitSystem: typedInField(),
+  })
+}
 
-const linesetFields = z.object({
-  number: z.number({ error: 'Enter a number' }).int('Must be a whole number').min(1, 'Must be 1 or more').max(9999),
-  name: requiredText(80),
-  kind: z.enum(LINESET_KINDS, { error: 'Choose a kind of lineset' }),
-  status: z.enum(LINESET_STATUSES, { error: 'Choose a status' }),
-  distanceFromPlasterLine: optionalNonNegative(),
-  battenLength: positive(),
-  pipeSize,
-  pipeWeightPerLength: nonNegative(),
-  pipeMomentOfInertia: optionalPositive(),
-  pipeSectionModulus: optionalPositive(),
-  pickPoints: z
-    .array(nonNegative(), { error: 'List the lift line positions' })
-    .min(1, 'At least one lift line')
-    .max(MAX_PICK_POINTS, `At most ${MAX_PICK_POINTS} lift lines`),
-  liftLineWeightPerLength: optionalNonNegative(),
-  liftLineBreakingStrength: optionalPositive(),
-  arborEmptyWeight: optionalNonNegative(),
-  arborCapacity: optionalPositive(),
-  arborStackLength: optionalPositive(),
-  ratedLoad: optionalPositive(),
-  pipeWeight: optionalNonNegative(),
-  travel: optionalPositive(),
-  sandbagWeight: optionalNonNegative(),
-  hoistRatedCapacity: optionalPositive(),
-  hoistSpeed: optionalPositive(),
-  notes: z.string().trim().max(2000, 'At most 2000 characters').optional(),
-  unitSystem: typedInField(),
-})
-
-type LinesetFields = z.infer<typeof linesetFields>
-
-const isFiniteNumber = (value: unknown): value is number => typeof value === 'number' && Number.isFinite(value)
+type LinesetFields = z.infer<ReturnType<typeof linesetFields>>
 
 /**
  * Rules between fields: positions along the batten, and what each kind must have. They run even while
- * other fields are wrong (see `whenObject`), so a form shows every problem at once; hence the type guards.
+ * other fields are wrong (see `whenObject`), so a form shows every problem at once.
  */
 function checkLineset(value: Partial<Record<keyof LinesetFields, unknown>>, ctx: z.RefinementCtx) {
   const pickPoints = Array.isArray(value.pickPoints) ? (value.pickPoints as unknown[]) : []
-  const length = isFiniteNumber(value.battenLength) ? value.battenLength : undefined
-  pickPoints.forEach((at, index) => {
-    const previous = pickPoints[index - 1]
-    if (!isFiniteNumber(at)) return
-    if (length !== undefined && at > length)
-      ctx.addIssue({ code: 'custom', path: ['pickPoints', index], message: 'Lies beyond the end of the batten' })
-    else if (isFiniteNumber(previous) && at <= previous)
-      ctx.addIssue({ code: 'custom', path: ['pickPoints', index], message: 'List positions in order, each once' })
-  })
+  for (const { index, message } of pickPointProblems(pickPoints, value.battenLength))
+    ctx.addIssue({ code: 'custom', path: ['pickPoints', index], message })
   const require = (field: keyof LinesetFields, message: string) => {
     if (value[field] === null || value[field] === undefined) ctx.addIssue({ code: 'custom', path: [field], message })
   }
@@ -95,8 +86,8 @@ function checkLineset(value: Partial<Record<keyof LinesetFields, unknown>>, ctx:
     require('arborCapacity', 'A counterweight set needs its arbor capacity')
   }
   if (value.kind === 'motorized') require('hoistRatedCapacity', 'A motorized set needs its hoist rated capacity')
-  if (value.kind === 'hemp-single' && pickPoints.length !== 1)
-    ctx.addIssue({ code: 'custom', path: ['pickPoints'], message: 'A single-line hemp set has exactly one line' })
+  if (wrongLineCount(value.kind, pickPoints.length))
+    ctx.addIssue({ code: 'custom', path: ['pickPoints'], message: SINGLE_LINE_HEMP_RULE })
 }
 
 // Run the rules between fields whenever the body is an object, not only once every field is valid.
@@ -104,15 +95,24 @@ const whenObject = {
   when: (payload: { value: unknown }) => typeof payload.value === 'object' && payload.value !== null,
 }
 
-/** The lineset form and the body of `POST /api/v1/linesets`, figures in the venue's units. */
-export const linesetInputSchema = linesetFields.superRefine(checkLineset, whenObject)
-export type LinesetInput = z.infer<typeof linesetInputSchema>
+const buildInput = (units: UnitSystem) => linesetFields(units).superRefine(checkLineset, whenObject)
+const buildUpdate = (units: UnitSystem) =>
+  linesetFields(units).extend({ version: versionField() }).superRefine(checkLineset, whenObject)
+const inputSchemas = { imperial: buildInput('imperial'), metric: buildInput('metric') }
+const updateSchemas = { imperial: buildUpdate('imperial'), metric: buildUpdate('metric') }
+
+/**
+ * The lineset form and the body of `POST /api/v1/linesets`, figures in the venue's units (which set their ranges).
+ *
+ * @example
+ * linesetInputSchemaFor('metric').safeParse({ ...body, battenLength: 50 }).success // false: 0.01 to 40 m
+ */
+export const linesetInputSchemaFor = (units: UnitSystem) => inputSchemas[units]
+export type LinesetInput = z.infer<ReturnType<typeof buildInput>>
 
 /** The body of `PUT /api/v1/linesets/:id`: the whole lineset plus the version it was read at. */
-export const linesetUpdateSchema = linesetFields
-  .extend({ version: versionField() })
-  .superRefine(checkLineset, whenObject)
-export type LinesetUpdate = z.infer<typeof linesetUpdateSchema>
+export const linesetUpdateSchemaFor = (units: UnitSystem) => updateSchemas[units]
+export type LinesetUpdate = z.infer<ReturnType<typeof buildUpdate>>
 
 /** A lineset as the API returns it; `unitSystem` is the one its figures are in (the venue's). */
 export interface Lineset extends LinesetInput {

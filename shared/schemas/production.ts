@@ -1,6 +1,6 @@
 import { z } from 'zod'
-import { plainText } from './plain-text.js'
 import { versionField } from './quantity.js'
+import { singleLineText } from './text.js'
 
 /** Where a show stands: being planned, in performance, or over. */
 export const PRODUCTION_STATES = ['planning', 'running', 'closed'] as const
@@ -19,7 +19,7 @@ const performanceDay = () =>
     .refine((day) => day >= '1900-01-01' && day <= '2999-12-31', 'Enter a date between 1900 and 2999')
 
 const productionFields = z.object({
-  name: plainText(80, { required: true }),
+  name: singleLineText('Name', 80, { required: true }),
   firstPerformance: performanceDay(),
   lastPerformance: performanceDay(),
   state: z.enum(PRODUCTION_STATES, { error: 'Choose planning, running or closed' }),

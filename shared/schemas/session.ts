@@ -1,12 +1,9 @@
 import { z } from 'zod'
 import type { Role } from './role.js'
+import { emailAddress } from './text.js'
 
 export const signInSchema = z.object({
-  email: z
-    .string({ error: 'Enter your e-mail address' })
-    .trim()
-    .toLowerCase()
-    .pipe(z.email('Enter a valid e-mail address')),
+  email: emailAddress('Enter your e-mail address'),
   password: z.string({ error: 'Enter your password' }).min(1, 'Enter your password').max(200),
 })
 export type SignIn = z.infer<typeof signInSchema>

@@ -2,7 +2,7 @@ import { z } from 'zod'
 import { UNIT_SYSTEMS } from '../units/systems.js'
 import { passwordSchema, refusePasswordMatchingEmail } from './password.js'
 import { personInputSchema } from './person.js'
-import { requiredText } from './quantity.js'
+import { singleLineText } from './text.js'
 
 /**
  * Opening a venue with its first administrator, from the command line of the server that hosts it
@@ -10,10 +10,10 @@ import { requiredText } from './quantity.js'
  */
 export const venueOpeningSchema = z
   .object({
-    venueName: requiredText(120),
+    venueName: singleLineText('Venue name', 120, { required: true }),
     unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Choose imperial or metric' }),
     email: personInputSchema.shape.email,
-    name: requiredText(120),
+    name: singleLineText('Name', 120, { required: true }),
     password: passwordSchema,
   })
   .superRefine(refusePasswordMatchingEmail)

@@ -1,21 +1,30 @@
 import { z } from 'zod'
-import { UNIT_SYSTEMS } from '../units/systems.js'
-import { nonNegative, requiredText, versionField } from './quantity.js'
+import type { UnitSystem } from '../units/systems.js'
+import { designFactor, figure, versionField } from './quantity.js'
+import { singleLineText } from './text.js'
 
-/** Venue settings: its unit system and the policies every balance check uses. */
-export const venueSettingsSchema = z.object({
-  name: requiredText(120),
-  unitSystem: z.enum(UNIT_SYSTEMS, { error: 'Choose imperial or metric' }),
-  balanceTolerance: nonNegative(),
-  ropeLockHolding: nonNegative(),
-  wireRopeDesignFactor: z
-    .number({ error: 'Enter a number' })
-    .finite()
-    .min(1, 'Must be 1 or more')
-    .max(20, 'At most 20'),
-  version: versionField(),
+const settingsIn = (units: UnitSystem) =>
+  z.object({
+    name: singleLineText('Venue name', 120, { required: true }),
+    unitSystem: z.literal(units, { error: 'Choose imperial or metric' }),
+    balanceTolerance: figure('tolerance', units, 'Balance tolerance'),
+    ropeLockHolding: figure('ropeLockHolding', units, 'Rope lock holding'),
+    wireRopeDesignFactor: designFactor('Design factor'),
+    version: versionField(),
+  })
+
+/**
+ * Venue settings: its unit system and the policies every balance check uses. The policies are in the unit
+ * system being chosen, which sets their ranges.
+ *
+ * @example
+ * venueSettingsSchema.safeParse({ name: 'Playhouse', unitSystem: 'metric', balanceTolerance: 5,
+ *   ropeLockHolding: 23, wireRopeDesignFactor: 8, version: 0 }).success // true
+ */
+export const venueSettingsSchema = z.discriminatedUnion('unitSystem', [settingsIn('imperial'), settingsIn('metric')], {
+  error: (issue) => (issue.code === 'invalid_union' ? 'Choose imperial or metric' : undefined),
 })
-export type VenueSettingsUpdate = z.infer<typeof venueSettingsSchema>
+export type VenueSettingsUpdate = z.infer<ReturnType<typeof settingsIn>>
 
 export interface Venue extends VenueSettingsUpdate {
   id: string

@@ -1,5 +1,5 @@
 import type { Decimal } from 'decimal.js'
-import { roundTo } from './rounding.js'
+import { Dec } from './decimal.js'
 import { unitLabel, type Quantity, type UnitSystem } from './systems.js'
 
 /**
@@ -27,11 +27,12 @@ export const DISPLAY_PLACES: Readonly<Record<Quantity, number>> = {
  * displayNumber('-1234.5', 2) // '-1,234.5'
  */
 export function displayNumber(value: Decimal.Value, places: number): string {
-  const rounded = roundTo(value, places)
-  const [whole, fraction = ''] = Math.abs(rounded).toFixed(places).split('.') as [string, string?]
+  const rounded = Dec(value).toDecimalPlaces(places, Dec.ROUND_HALF_UP)
+  // A decimal's toFixed never turns to exponent notation, however large the figure.
+  const [whole, fraction = ''] = rounded.abs().toFixed(places).split('.') as [string, string?]
   const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',')
   const tail = fraction.replace(/0+$/, '')
-  return `${rounded < 0 ? '-' : ''}${grouped}${tail ? `.${tail}` : ''}`
+  return `${rounded.isNegative() && !rounded.isZero() ? '-' : ''}${grouped}${tail ? `.${tail}` : ''}`
 }
 
 /**

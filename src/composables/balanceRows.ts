@@ -40,7 +40,7 @@ export const ROW_FIGURES: Readonly<Record<BalanceRowKind, readonly BalanceFigure
 export const isBlankRow = (row: BalanceRow) =>
   row.label.trim() === '' && ROW_FIGURES[row.kind].every((key) => row[key].trim() === '')
 
-// Text that is not a number goes on as NaN so the engine's own message ("must be a finite number") shows.
+// Text that is not a number goes on as NaN so the engine's own message ("must be a number") shows.
 const figure = (text: string) => (text.trim() === '' ? undefined : Number(text))
 
 /**

@@ -1,5 +1,5 @@
 import { computed, inject, provide, reactive, ref, type InjectionKey } from 'vue'
-import { linesetInputSchema, type LinesetInput } from '../../shared/schemas/index.js'
+import { linesetInputSchemaFor, type LinesetInput } from '../../shared/schemas/index.js'
 import { fieldsFromIssues } from '../../shared/errors/fields.js'
 import { unitLabel, type UnitSystem } from '../../shared/units/index.js'
 import type { DecimalInput } from '../../shared/units/index.js'
@@ -27,7 +27,10 @@ export function useLinesetForm(options: Options) {
   const pristine = JSON.stringify(draft)
   const dirty = computed(() => !options.readonly() && JSON.stringify(draft) !== pristine)
 
-  const verdict = computed(() => linesetInputSchema.safeParse(bodyFrom(draft, figures, options.unitSystem())))
+  const verdict = computed(() => {
+    const units = options.unitSystem()
+    return linesetInputSchemaFor(units).safeParse(bodyFrom(draft, figures, units))
+  })
   const clientFields = computed(() => (verdict.value.success ? {} : fieldsFromIssues(verdict.value.error.issues)))
 
   function messageFor(key: string): string | undefined {

@@ -72,14 +72,17 @@ export function useLiveBalance(sources: Sources) {
     for (const [path, message] of Object.entries(fields.value)) place(path, message, counted.value)
     // The schema leaves its cross-field rules (beyond the batten end) until every figure reads as a number, so
     // each row is also checked alone: a stretch past the end shows while another row still holds a typo.
-    if (input.value && Object.keys(fields.value).length)
+    if (input.value && Object.keys(fields.value).length) {
+      // Only the batten bears on an item's own rules: a set needing nothing else keeps each check small.
+      const { units, batten } = input.value
       for (const row of counted.value) {
         if (byRow[row.id]) continue
-        const alone = calculationInputSchema.safeParse({ ...input.value, items: [itemFrom(row)] })
+        const alone = calculationInputSchema.safeParse({ units, kind: 'hemp-multi', batten, items: [itemFrom(row)] })
         if (!alone.success)
           for (const [path, message] of Object.entries(fieldsFromIssues(alone.error.issues)))
             place(path, message, [row])
       }
+    }
     return byRow
   })
 

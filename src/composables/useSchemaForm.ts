@@ -1,13 +1,14 @@
-import { computed, reactive, ref } from 'vue'
+import { computed, reactive, ref, toValue, type MaybeRefOrGetter } from 'vue'
 import type { z } from 'zod'
 import { fieldsFromIssues } from '../../shared/errors/fields.js'
 
 /**
  * A small form checked by a shared schema: `parse` turns the typed text into the body the schema expects,
  * messages show for fields that were left or after a submit, and the server's field messages win until edited.
+ * The schema may be a getter, for schemas that depend on the venue's units.
  */
 export function useSchemaForm<Schema extends z.ZodType, Draft extends Record<string, unknown>>(
-  schema: Schema,
+  schema: MaybeRefOrGetter<Schema>,
   initial: () => Draft,
   parse: (draft: Draft) => unknown,
 ) {
@@ -16,7 +17,7 @@ export function useSchemaForm<Schema extends z.ZodType, Draft extends Record<str
   const submitted = ref(false)
   const serverFields = ref<Record<string, string>>({})
 
-  const verdict = computed(() => schema.safeParse(parse(draft as Draft)))
+  const verdict = computed(() => toValue(schema).safeParse(parse(draft as Draft)))
   const clientFields = computed(() => (verdict.value.success ? {} : fieldsFromIssues(verdict.value.error.issues)))
 
   const messageFor = (key: string) =>

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { MAX_ITEMS } from '../../shared/schemas/calculation.js'
 import { databaseFingerprint } from '../support/database-fingerprint.js'
 import { sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
 import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
@@ -237,12 +238,12 @@ describe('bad input', () => {
     expect(await databaseFingerprint(app.handle.db.sequelize)).toBe(before)
   })
 
-  it('when more than 1,000 items are sent, or entries would make more than 1,000 loads, then it answers 400 and writes nothing', async () => {
+  it('when more than 1,000 items are sent, or entries would make more loads than one batten takes, then it answers 400 and writes nothing', async () => {
     const before = await databaseFingerprint(app.handle.db.sequelize)
     const many = Array.from({ length: 1001 }, () => ({ label: 'X', category: 'other', weight: 1, at: 5 }))
     expect((await save(alpha.linesetId, many)).body.error.fields).toHaveProperty('items')
     const spread = [
-      { label: 'X', category: 'lighting', itemTypeId: washId, quantity: 1000, from: 0, to: 40 },
+      { label: 'X', category: 'lighting', itemTypeId: washId, quantity: MAX_ITEMS, from: 0, to: 40 },
       { label: 'Y', category: 'other', weight: 1, at: 5 },
     ]
     const res = await save(alpha.linesetId, spread)

@@ -32,9 +32,9 @@ describe('validation errors change nothing', () => {
     expect(res.status).toBe(400)
     expect(res.body.error.code).toBe('validation_failed')
     expect(res.body.error.fields).toMatchObject({
-      battenLength: 'Must be more than zero',
+      battenLength: 'Batten length must be between 0.0329 and 131 ft',
       kind: 'Choose a kind of lineset',
-      name: 'Must not be empty',
+      name: 'Name must not be empty',
     })
     expect(await snapshot()).toEqual(before)
   })
@@ -43,8 +43,8 @@ describe('validation errors change nothing', () => {
     const res = await td.post('/api/v1/linesets', sampleLineset(8, { pickPoints: [0, 30, 20, 45] }))
     expect(res.status).toBe(400)
     expect(res.body.error.fields).toEqual({
-      'pickPoints.2': 'List positions in order, each once',
-      'pickPoints.3': 'Lies beyond the end of the batten',
+      'pickPoints.2': 'Pick points must be in order from one end: 20 comes after 30',
+      'pickPoints.3': "Pick point at 45 is beyond the batten's length of 40",
     })
   })
 
@@ -58,7 +58,7 @@ describe('validation errors change nothing', () => {
     const before = await snapshot()
     const res = await td.put(`/api/v1/linesets/${venue.linesetId}`, { ...sampleLineset(1), number: 'one', version: 0 })
     expect(res.status).toBe(400)
-    expect(res.body.error.fields.number).toBe('Enter a number')
+    expect(res.body.error.fields.number).toBe('Lineset number must be a number')
     expect(await snapshot()).toEqual(before)
   })
 
@@ -94,8 +94,8 @@ describe('validation errors change nothing', () => {
     })
     expect(res.status).toBe(400)
     expect(res.body.error.fields).toEqual({
-      unitWeight: 'Must be more than zero',
-      quantityOwned: 'Must be a whole number',
+      unitWeight: 'Weight of one brick must be between 0.0221 and 220 lb',
+      quantityOwned: 'Bricks owned must be a whole number between 0 and 100,000',
     })
     expect(await snapshot()).toEqual(before)
   })
@@ -136,8 +136,8 @@ describe('every problem is named at once', () => {
     })
     expect(res.status).toBe(400)
     expect(res.body.error.fields).toEqual({
-      travel: 'Enter a number',
-      'pickPoints.2': 'Lies beyond the end of the batten',
+      travel: 'Travel must be a number',
+      'pickPoints.2': "Pick point at 60 is beyond the batten's length of 48",
     })
   })
 })

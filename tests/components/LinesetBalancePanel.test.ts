@@ -145,7 +145,7 @@ describe('LinesetBalancePanel', () => {
     await w.get('[data-testid="balance-row-1-weightPerLength"] input').setValue('8')
     await w.get('[data-testid="balance-row-1-to"] input').setValue('60')
     await flushPromises()
-    expect(w.get('[data-testid="balance-row-0-messages"]').text()).toBe('Weight: Item weight must be a finite number')
+    expect(w.get('[data-testid="balance-row-0-messages"]').text()).toBe('Weight: Item weight must be a number')
     expect(w.get('[data-testid="balance-row-1-messages"]').text()).toBe(
       "To: Span end at 60 is beyond the batten's length of 40",
     )

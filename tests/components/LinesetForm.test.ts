@@ -1,6 +1,6 @@
 import { afterEach, describe, expect, it } from 'vitest'
 import { flushPromises, type VueWrapper } from '@vue/test-utils'
-import { linesetInputSchema, type LinesetInput } from '../../shared/schemas/index.js'
+import { linesetInputSchemaFor, type LinesetInput } from '../../shared/schemas/index.js'
 import LinesetForm from '../../src/components/LinesetForm.vue'
 import { lineset } from './fixtures'
 import { mountWithApp } from './mount'
@@ -40,7 +40,7 @@ describe('LinesetForm', () => {
     await third.setValue('44')
     await third.trigger('blur')
     await flushPromises()
-    expect(messagesOf(w, 'lineset-pick-point-2')).toBe('Lies beyond the end of the batten')
+    expect(messagesOf(w, 'lineset-pick-point-2')).toBe("Pick point at 44 is beyond the batten's length of 40")
     expect(messagesOf(w, 'lineset-pick-point-1')).toBe('')
   })
 
@@ -76,7 +76,7 @@ describe('LinesetForm', () => {
     await submit(w)
     const [body] = w.emitted<[LinesetInput]>('submit')?.[0] ?? []
     expect(body).toEqual({ ...counterweightSet, name: 'Border 3', travel: 52.5 })
-    expect(linesetInputSchema.parse(body)).toEqual(body)
+    expect(linesetInputSchemaFor('imperial').parse(body)).toEqual(body)
   })
 
   it('when a required figure is cleared and the field is left, then it asks for a number', async () => {
@@ -84,7 +84,7 @@ describe('LinesetForm', () => {
     const length = input(w, 'lineset-field-battenLength')
     await length.setValue('')
     await length.trigger('blur')
-    expect(messagesOf(w, 'lineset-field-battenLength')).toBe('Enter a number')
+    expect(messagesOf(w, 'lineset-field-battenLength')).toBe('Batten length is required')
   })
 
   it('when the server names a field, then its message shows at that position until the field is changed', async () => {

@@ -1,7 +1,7 @@
 import bcrypt from 'bcryptjs'
 import type { Role } from '../../shared/schemas/role.js'
 import { ROLES } from '../../shared/schemas/role.js'
-import { linesetInputSchema, type LinesetInput } from '../../shared/schemas/lineset.js'
+import { linesetInputSchemaFor, type LinesetInput } from '../../shared/schemas/lineset.js'
 import type { SessionUser } from '../../shared/schemas/session.js'
 import type { UnitSystem } from '../../shared/units/systems.js'
 import type { AppContext } from '../../server/context.js'
@@ -80,7 +80,10 @@ export async function seedVenue(
       membershipIds[role] = membership.id
     }
     const asAdministrator = { ...app, actor: members.administrator, transaction }
-    const lineset = await createLineset(asAdministrator, linesetInputSchema.parse({ ...sampleLineset(1), unitSystem }))
+    const lineset = await createLineset(
+      asAdministrator,
+      linesetInputSchemaFor(unitSystem).parse({ ...sampleLineset(1), unitSystem }),
+    )
     const brick = await createBrickType(asAdministrator, {
       name: 'Full',
       material: 'Steel',

@@ -1,5 +1,5 @@
 import type { HangEntry, ItemCategory } from '../../../shared/hang/hang-items.js'
-import { hangSaveSchema } from '../../../shared/schemas/hang.js'
+import { hangSaveSchemaFor } from '../../../shared/schemas/hang.js'
 import type { ServiceContext } from '../../context.js'
 import { saveHang } from '../../modules/hangs/hang.service.js'
 import { DEMO_HANGS, type DemoLibraryEntry, type DemoRevision } from './demo-hangs.js'
@@ -29,7 +29,7 @@ export async function seedDemoHangs(
     const linesetId = linesetsByNumber.get(number)!
     let basedOnRevision: number | null = null
     for (const { title, items } of revisions) {
-      const body = hangSaveSchema.parse({
+      const body = hangSaveSchemaFor('imperial').parse({
         title,
         productionId,
         basedOnRevision,

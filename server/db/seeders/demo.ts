@@ -1,8 +1,8 @@
 import bcrypt from 'bcryptjs'
-import { brickTypeInputSchema } from '../../../shared/schemas/brick-type.js'
-import { itemTypeInputSchema, type ItemCategory } from '../../../shared/schemas/item-type.js'
+import { brickTypeInputSchemaFor } from '../../../shared/schemas/brick-type.js'
+import { itemTypeInputSchemaFor, type ItemCategory } from '../../../shared/schemas/item-type.js'
 import { productionInputSchema } from '../../../shared/schemas/production.js'
-import { linesetInputSchema } from '../../../shared/schemas/lineset.js'
+import { linesetInputSchemaFor } from '../../../shared/schemas/lineset.js'
 import type { Role } from '../../../shared/schemas/role.js'
 import type { SessionUser } from '../../../shared/schemas/session.js'
 import type { AppContext } from '../../context.js'
@@ -53,11 +53,15 @@ export async function seedDemoIfEmpty(app: AppContext): Promise<boolean> {
     // Demo data obeys the same contract as the forms.
     const linesets = new Map<number, string>()
     for (const lineset of DEMO_LINESETS)
-      linesets.set(lineset.number, (await createLineset(asAdministrator, linesetInputSchema.parse(lineset))).id)
-    for (const brick of DEMO_BRICK_TYPES) await createBrickType(asAdministrator, brickTypeInputSchema.parse(brick))
+      linesets.set(
+        lineset.number,
+        (await createLineset(asAdministrator, linesetInputSchemaFor('imperial').parse(lineset))).id,
+      )
+    for (const brick of DEMO_BRICK_TYPES)
+      await createBrickType(asAdministrator, brickTypeInputSchemaFor('imperial').parse(brick))
     const library = new Map<string, { id: string; category: ItemCategory }>()
     for (const item of DEMO_ITEM_TYPES)
-      library.set(item.name, await createItemType(asAdministrator, itemTypeInputSchema.parse(item)))
+      library.set(item.name, await createItemType(asAdministrator, itemTypeInputSchemaFor('imperial').parse(item)))
     const show = await createProduction(asAdministrator, productionInputSchema.parse(demoProduction(app.clock.now())))
     const asFlyOperator = { ...app, actor: members.get('fly-operator')!, transaction }
     await seedDemoHangs(asFlyOperator, linesets, library, show.id)

@@ -1,10 +1,10 @@
 import { Router } from 'express'
-import { hangParamsSchema, hangSaveSchema } from '../../../shared/schemas/hang.js'
+import { hangParamsSchema, hangSaveSchemaFor } from '../../../shared/schemas/hang.js'
 import { idParamsSchema } from '../../../shared/schemas/id.js'
 import { HANG_EDITORS, ROLES } from '../../../shared/schemas/role.js'
 import { memberContext, type AppContext } from '../../context.js'
 import { requireRole } from '../../http/auth.js'
-import { validate } from '../../http/validate.js'
+import { validate, validateByUnitsTypedIn } from '../../http/validate.js'
 import * as hangs from './hang.service.js'
 
 /** A lineset's saved hangs, mounted beside the lineset routes: everyone reads, the fly crew saves. */
@@ -16,7 +16,8 @@ export function hangRoutes(app: AppContext) {
   router.post(
     '/:id/hangs',
     requireRole(HANG_EDITORS),
-    validate({ params: idParamsSchema, body: hangSaveSchema }),
+    validate({ params: idParamsSchema }),
+    validateByUnitsTypedIn(hangSaveSchemaFor),
     async (req, res) => {
       res.status(201).json(await hangs.saveHang(memberContext(app, req), req.params.id as string, req.body))
     },

@@ -1,11 +1,11 @@
 import { Router } from 'express'
 import { idParamsSchema } from '../../../shared/schemas/id.js'
 import { linesetEventsQuerySchema, type LinesetEventsQuery } from '../../../shared/schemas/lineset-event.js'
-import { linesetInputSchema, linesetUpdateSchema } from '../../../shared/schemas/lineset.js'
+import { linesetInputSchemaFor, linesetUpdateSchemaFor } from '../../../shared/schemas/lineset.js'
 import { INVENTORY_EDITORS, ROLES } from '../../../shared/schemas/role.js'
 import { memberContext, type AppContext } from '../../context.js'
 import { requireRole } from '../../http/auth.js'
-import { validate } from '../../http/validate.js'
+import { validate, validateByUnitsTypedIn } from '../../http/validate.js'
 import { listLinesetEvents } from './lineset-events.service.js'
 import * as linesets from './lineset.service.js'
 
@@ -33,14 +33,14 @@ export function linesetRoutes(app: AppContext) {
       )
     },
   )
-  router.post('/', requireRole(INVENTORY_EDITORS), validate({ body: linesetInputSchema }), async (req, res) => {
+  router.post('/', requireRole(INVENTORY_EDITORS), validateByUnitsTypedIn(linesetInputSchemaFor), async (req, res) => {
     res.status(201).json(await linesets.createLineset(memberContext(app, req), req.body))
   })
   router.put(
     '/:id',
     requireRole(INVENTORY_EDITORS),
     byId,
-    validate({ body: linesetUpdateSchema }),
+    validateByUnitsTypedIn(linesetUpdateSchemaFor),
     async (req, res) => {
       res.json(await linesets.updateLineset(memberContext(app, req), req.params.id as string, req.body))
     },

@@ -1,20 +1,21 @@
 import { describe, expect, it } from 'vitest'
-import { planBricks } from '../../../shared/engine/brick-plan.js'
+import { BRICK_PLAN_WORK_LIMIT, planBricks } from '../../../shared/engine/brick-plan.js'
 import { runCalculation } from '../../../shared/engine/calculate.js'
 
-// Eight brick types with awkward, many-decimal weights: a stock no house has, but one a request can send.
+// Eight brick types with awkward, six-decimal weights: a stock no house has, but one a request can send.
+const sixPlaces = (value: number) => Math.round(value * 1e6) / 1e6
 const awkward = Array.from({ length: 8 }, (_, k) => ({
   name: `b${k}`,
-  weight: 7 + k * 1.37 + 0.000137 * k,
-  thickness: 1 + k * 0.13,
+  weight: sixPlaces(7 + k * 1.37 + 0.000137 * k),
+  thickness: sixPlaces(1 + k * 0.13),
   available: 50,
 }))
 
 describe('the brick plan on an unusual stock', () => {
   it('when the search reaches its work limit, then it answers at once with a plan that still fits and says it is unproven', () => {
-    const started = Date.now()
     const plan = planBricks(awkward, 1999.99, 1000)
-    expect(Date.now() - started).toBeLessThan(5000) // a guard against hanging, not a speed target (see npm run bench)
+    // Work is counted, not timed (speed lives in npm run bench).
+    expect(plan.work).toBe(BRICK_PLAN_WORK_LIMIT)
     expect(plan.complete).toBe(false)
     expect(plan.loaded.lte(1999.99)).toBe(true)
     plan.counts.forEach((count, k) => expect(count).toBeLessThanOrEqual(awkward[k]!.available))
@@ -26,7 +27,7 @@ describe('the brick plan on an unusual stock', () => {
       kind: 'counterweight-single',
       batten: { length: 40, weightPerLength: 2.25, pickPoints: [0, 20, 40] },
       items: [{ weight: 2000, at: 20 }],
-      arbor: { emptyWeight: 90, capacity: 3000, stackLength: 1000 },
+      arbor: { emptyWeight: 90, capacity: 3000, stackLength: 390 },
       bricks: awkward,
       tolerance: 10,
     })

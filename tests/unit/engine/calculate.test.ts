@@ -60,7 +60,7 @@ describe('calculate', () => {
     const input = {
       ...SAMPLE_INPUT,
       kind: 'counterweight-double',
-      arbor: { emptyWeight: 90, capacity: 5000, stackLength: 600 },
+      arbor: { emptyWeight: 90, capacity: 5000, stackLength: 300 },
       bricks: [{ name: 'full', weight: 20, thickness: 2, available: 300 }],
       trims: { in: 4, out: 52 },
     }

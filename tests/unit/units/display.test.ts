@@ -20,6 +20,7 @@ describe('one display-rounding rule', () => {
     expect(displayNumber(1234567.1, 2)).toBe('1,234,567.1')
     expect(displayNumber(40, 2)).toBe('40')
     expect(displayNumber(-0.001, 2)).toBe('0')
+    expect(displayNumber(1e21, 2)).toBe('1,000,000,000,000,000,000,000')
   })
 
   it('when each quantity is shown, then its places come from the one table', () => {

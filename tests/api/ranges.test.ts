@@ -85,7 +85,10 @@ describe('figures outside their physical ranges', () => {
 
   it('when the venue is metric, then the ranges are the metric ones: 50 m is refused where 50 ft is not', async () => {
     const metricTd = await signedIn(app.url, metricVenue.emails['technical-director'])
-    const res = await metricTd.post('/api/v1/linesets', sampleLineset(2, { battenLength: 50, pickPoints: [0, 25, 50] }))
+    const res = await metricTd.post(
+      '/api/v1/linesets',
+      sampleLineset(2, { battenLength: 50, pickPoints: [0, 25, 50], unitSystem: 'metric' }),
+    )
     expect(res.status).toBe(400)
     expect(res.body.error.fields.battenLength).toBe('Batten length must be between 0.01 and 40 m')
     const imperial = await td.post('/api/v1/linesets', sampleLineset(2, { battenLength: 50, pickPoints: [0, 25, 50] }))

@@ -30,7 +30,7 @@ describe('figures typed in units the venue has left', () => {
   it('when a lineset typed in imperial is created after the switch to metric, then it answers 409 and stores nothing', async () => {
     const before = await stored()
     const res = await td.post('/api/v1/linesets', sampleLineset(5, { unitSystem: 'imperial' }))
-    expect(res.status).toBe(409)
+    expect(res.status, JSON.stringify(res.body)).toBe(409)
     expect(res.body.error.code).toBe('units_changed')
     expect(res.body.error.message).toMatch(/metric.*imperial.*reload/i)
     expect(await stored()).toEqual(before)
@@ -39,12 +39,14 @@ describe('figures typed in units the venue has left', () => {
   it('when a brick type typed in imperial is created or changed after the switch, then both answer 409 and store nothing', async () => {
     const before = await stored()
     const created = await td.post('/api/v1/brick-types', { ...brick, unitSystem: 'imperial' })
-    expect(created.status).toBe(409)
+    expect(created.status, JSON.stringify(created.body)).toBe(409)
     expect(created.body.error.code).toBe('units_changed')
     const current = (await td.get('/api/v1/brick-types').expect(200)).body[0]
+    // The form was filled in before the switch: its figures are imperial ones.
     const changed = await td.put(`/api/v1/brick-types/${current.id}`, {
       ...current,
       unitWeight: 30,
+      thickness: 2,
       unitSystem: 'imperial',
     })
     expect(changed.status).toBe(409)
@@ -55,12 +57,13 @@ describe('figures typed in units the venue has left', () => {
 
   it('when a lineset change typed in imperial arrives with a current version, then it still answers 409 units_changed', async () => {
     const current = (await td.get(`/api/v1/linesets/${venue.linesetId}`).expect(200)).body
+    // Figures from a form filled in before the switch, carrying the lineset's current version.
     const res = await td.put(`/api/v1/linesets/${venue.linesetId}`, {
-      ...current,
-      battenLength: 40,
+      ...sampleLineset(1),
+      version: current.version,
       unitSystem: 'imperial',
     })
-    expect(res.status).toBe(409)
+    expect(res.status, JSON.stringify(res.body)).toBe(409)
     expect(res.body.error.code).toBe('units_changed')
     expect((await td.get(`/api/v1/linesets/${venue.linesetId}`).expect(200)).body).toEqual(current)
   })

@@ -81,6 +81,7 @@ describe('figure ranges', () => {
       pipeSize: 'custom',
       pipeWeightPerLength: 2.5e9,
       pickPoints: [0, 20, 40],
+      unitSystem: 'imperial',
     })
     expect(parsed.error?.issues.map((issue) => issue.path.join('.'))).toEqual(['pipeWeightPerLength'])
   })

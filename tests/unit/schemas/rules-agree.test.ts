@@ -37,6 +37,7 @@ const baseLineset = (kind: LinesetKind, units: UnitSystem = 'imperial') => ({
   travel: 50,
   sandbagWeight: 20,
   hoistRatedCapacity: 2000,
+  unitSystem: units,
 })
 const baseVenue = (units: UnitSystem): Venue => ({
   id: '00000000-0000-4000-8000-000000000002',
@@ -47,7 +48,14 @@ const baseVenue = (units: UnitSystem): Venue => ({
   wireRopeDesignFactor: 8,
   version: 0,
 })
-const baseBrick = { name: 'Full', material: 'Steel', unitWeight: 19.5, thickness: 2, quantityOwned: 400 }
+const brickIn = (units: UnitSystem) => ({
+  name: 'Full',
+  material: 'Steel',
+  unitWeight: 19.5,
+  thickness: 2,
+  quantityOwned: 400,
+  unitSystem: units,
+})
 
 /** Each lineset figure and where the calculation input carries it, with a kind that carries it. */
 const LINESET_TO_CALCULATION: ReadonlyArray<[string, string, LinesetKind]> = [
@@ -81,7 +89,7 @@ function calculationFields(lineset: unknown, venue: unknown, brick: unknown): Re
   const input = linesetCalculationInput({
     lineset: lineset as Lineset,
     venue: venue as Venue,
-    brickTypes: [brick as typeof baseBrick],
+    brickTypes: [brick as ReturnType<typeof brickIn>],
     items: [],
   })
   const parsed = calculationInputSchema.safeParse(input)
@@ -101,8 +109,10 @@ describe('the lineset rules and the calculation rules', () => {
     for (const units of ['imperial', 'metric'] as const) {
       expect(linesetInputSchemaFor(units).safeParse(baseLineset('counterweight-single', units)).success).toBe(true)
       expect(venueSettingsSchema.safeParse(baseVenue(units)).success).toBe(true)
-      expect(brickTypeInputSchemaFor(units).safeParse(baseBrick).success).toBe(true)
-      expect(calculationFields(baseLineset('counterweight-single', units), baseVenue(units), baseBrick)).toBeUndefined()
+      expect(brickTypeInputSchemaFor(units).safeParse(brickIn(units)).success).toBe(true)
+      expect(
+        calculationFields(baseLineset('counterweight-single', units), baseVenue(units), brickIn(units)),
+      ).toBeUndefined()
     }
   })
 
@@ -116,7 +126,7 @@ describe('the lineset rules and the calculation rules', () => {
           const lineset = setAt(baseLineset(kind, units), field, value)
           const own = linesetInputSchemaFor(units).safeParse(lineset)
           const refusedHere = !own.success && field in fieldsFromIssues(own.error.issues)
-          const refusedThere = path in (calculationFields(lineset, baseVenue(units), baseBrick) ?? {})
+          const refusedThere = path in (calculationFields(lineset, baseVenue(units), brickIn(units)) ?? {})
           expect(refusedThere, `${field} = ${value} (${units})`).toBe(refusedHere)
         },
       ),
@@ -130,7 +140,7 @@ describe('the lineset rules and the calculation rules', () => {
         const pickPoints = Array.from({ length: lines }, (_, k) => k)
         const lineset = { ...baseLineset('hemp-multi', units), battenLength: 40, pickPoints }
         const own = linesetInputSchemaFor(units).safeParse(lineset)
-        const there = calculationFields(lineset, baseVenue(units), baseBrick)
+        const there = calculationFields(lineset, baseVenue(units), brickIn(units))
         expect(own.success, `${lines} lines`).toBe(there === undefined)
       }),
     )
@@ -147,7 +157,7 @@ describe('the lineset rules and the calculation rules', () => {
     ]
     fc.assert(
       fc.property(fc.constantFrom(...pairs), figureValues, unitSystems, ([record, field, path], value, units) => {
-        const brick = record === 'brick' ? { ...baseBrick, [field]: value } : baseBrick
+        const brick = record === 'brick' ? { ...brickIn(units), [field]: value } : brickIn(units)
         const venue = record === 'venue' ? { ...baseVenue(units), [field]: value } : baseVenue(units)
         const own =
           record === 'brick' ? brickTypeInputSchemaFor(units).safeParse(brick) : venueSettingsSchema.safeParse(venue)

@@ -44,6 +44,7 @@ describe('the text rule', () => {
       unitWeight: 19.5,
       thickness: 2,
       quantityOwned: 10,
+      unitSystem: 'imperial',
     })
     expect(brick.error?.issues.map((issue) => issue.path.join('.'))).toEqual(['name', 'material'])
     const person = personInputSchema.safeParse({ email: 'a@b.test', name: 'Ann\u0000', role: 'stage-manager' })

@@ -49,8 +49,8 @@ export default defineConfig({
           include: ['tests/e2e/**/*.test.ts'],
           // One at a time: they share the built client in dist/ and the machine's two cores.
           fileParallelism: false,
-          testTimeout: 60000,
-          hookTimeout: 120000,
+          testTimeout: 180000,
+          hookTimeout: 180000,
         },
       },
     ],

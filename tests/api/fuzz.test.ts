@@ -1,8 +1,8 @@
 import fc from 'fast-check'
-import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { describe, expect, it } from 'vitest'
 import { databaseFingerprint } from '../support/database-fingerprint.js'
-import { sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
-import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import { sampleLineset, type VenueFixture } from '../support/fixtures.js'
+import { venueSuite } from '../support/venue-suite.js'
 
 // A few hundred generated bad bodies across every write route, sent by an administrator (who may call
 // them all): none may answer 500 or show a stack, and a refused request must write nothing.
@@ -45,12 +45,27 @@ const TARGETS: Target[] = [
   {
     method: 'post',
     path: () => '/api/v1/brick-types',
-    valid: () => ({ name: 'Fuzz', material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5 }),
+    valid: () => ({
+      name: 'Fuzz',
+      material: 'Steel',
+      unitWeight: 20,
+      thickness: 2,
+      quantityOwned: 5,
+      unitSystem: 'imperial',
+    }),
   },
   {
     method: 'put',
     path: (v) => `/api/v1/brick-types/${v.brickTypeId}`,
-    valid: () => ({ name: 'Full', material: 'Steel', unitWeight: 20, thickness: 2, quantityOwned: 5, version: 999 }),
+    valid: () => ({
+      name: 'Full',
+      material: 'Steel',
+      unitWeight: 20,
+      thickness: 2,
+      quantityOwned: 5,
+      unitSystem: 'imperial',
+      version: 999,
+    }),
   },
   {
     method: 'post',
@@ -153,6 +168,13 @@ const oddValues: Json[] = [
   '1e999',
   'NaN',
   ' 12 ',
+  '\u202E',
+  '\u2028',
+  '\t\u0007',
+  0.1 + 0.2,
+  100000000000,
+  [1e308],
+  { length: 1 },
   [],
   {},
   [[[]]],
@@ -161,6 +183,8 @@ const oddValues: Json[] = [
 const oddValue: fc.Arbitrary<Json> = fc.oneof(
   fc.constantFrom(...oddValues),
   fc.string(),
+  fc.string({ unit: 'binary', maxLength: 40 }),
+  fc.string({ unit: fc.integer({ min: 0, max: 0x1f }).map((code) => String.fromCharCode(code)), maxLength: 5 }),
   fc.integer(),
   fc.double({ noNaN: true, noDefaultInfinity: true }),
   fc.jsonValue({ maxDepth: 2 }) as fc.Arbitrary<Json>,
@@ -197,25 +221,16 @@ const badBody = (valid: Record<string, Json>) =>
     { weight: 1, arbitrary: fc.jsonValue({ maxDepth: 3 }) as fc.Arbitrary<Json> },
   )
 
-let app: TestApp
-let venue: VenueFixture
-let admin: Client
-
-beforeAll(async () => {
-  app = await startTestApp()
-  venue = await seedVenue(app.handle.context, 'alpha')
-  admin = await signedIn(app.url, venue.emails.administrator)
-})
-afterAll(() => app.stop())
+const suite = venueSuite('administrator')
 
 async function expectCleanAnswer(send: () => PromiseLike<{ status: number; text: string; body: unknown }>) {
-  const before = await databaseFingerprint(app.handle.db.sequelize)
+  const before = await databaseFingerprint(suite.app.handle.db.sequelize)
   const res = await send()
   expect(res.status, res.text).toBeLessThan(500)
   expect(res.text).not.toMatch(/\n\s+at |node_modules|Sequelize|TypeError|RangeError/)
   if (res.status >= 400) {
     expect((res.body as { error?: { code?: unknown } }).error?.code, res.text).toEqual(expect.any(String))
-    expect(await databaseFingerprint(app.handle.db.sequelize)).toBe(before)
+    expect(await databaseFingerprint(suite.app.handle.db.sequelize)).toBe(before)
   }
 }
 
@@ -223,10 +238,10 @@ describe('generated bad requests', () => {
   for (const target of TARGETS) {
     it(`when ${target.method.toUpperCase()} ${target.path({ linesetId: ':id', brickTypeId: ':id', membershipIds: { 'stage-manager': ':id' } } as VenueFixture)} gets odd bodies, then it never answers 500 and a refusal writes nothing`, async () => {
       await fc.assert(
-        fc.asyncProperty(badBody(target.valid(venue)), async (body) => {
+        fc.asyncProperty(badBody(target.valid(suite.venue)), async (body) => {
           await expectCleanAnswer(() =>
-            admin.agent[target.method](target.path(venue))
-              .set('X-CSRF-Token', admin.csrfToken)
+            suite.client.agent[target.method](target.path(suite.venue))
+              .set('X-CSRF-Token', suite.client.csrfToken)
               .set('Content-Type', 'application/json')
               .send(JSON.stringify(body) ?? 'null'),
           )
@@ -240,12 +255,12 @@ describe('generated bad requests', () => {
   const KNOWN_BAD: Json[] = ['a\u0000b', 'x\ud800', 1e21, 1e-308, 2147483647, 1e-7, 2.5e9]
   for (const target of TARGETS) {
     it(`when ${target.method.toUpperCase()} ${target.path({ linesetId: ':id', brickTypeId: ':id', membershipIds: { 'stage-manager': ':id' } } as VenueFixture)} gets each known bad value at each field, then none answers 500`, async () => {
-      const valid = target.valid(venue)
+      const valid = target.valid(suite.venue)
       for (const key of Object.keys(valid))
         for (const odd of KNOWN_BAD)
           await expectCleanAnswer(() =>
-            admin.agent[target.method](target.path(venue))
-              .set('X-CSRF-Token', admin.csrfToken)
+            suite.client.agent[target.method](target.path(suite.venue))
+              .set('X-CSRF-Token', suite.client.csrfToken)
               .set('Content-Type', 'application/json')
               .send(JSON.stringify({ ...valid, [key]: odd })),
           )
@@ -260,9 +275,9 @@ describe('generated bad requests', () => {
     await fc.assert(
       fc.asyncProperty(raw, fc.constantFrom('linesets', 'brick-types', 'people', 'invitations'), async (text, noun) => {
         await expectCleanAnswer(() =>
-          admin.agent
+          suite.client.agent
             .post(`/api/v1/${noun}`)
-            .set('X-CSRF-Token', admin.csrfToken)
+            .set('X-CSRF-Token', suite.client.csrfToken)
             .set('Content-Type', 'application/json')
             .send(text),
         )
@@ -273,7 +288,9 @@ describe('generated bad requests', () => {
     await fc.assert(
       fc.asyncProperty(id, fc.constantFrom('linesets', 'brick-types', 'people', 'invitations'), async (odd, noun) => {
         await expectCleanAnswer(() =>
-          admin.agent.delete(`/api/v1/${noun}/${encodeURIComponent(odd)}`).set('X-CSRF-Token', admin.csrfToken),
+          suite.client.agent
+            .delete(`/api/v1/${noun}/${encodeURIComponent(odd)}`)
+            .set('X-CSRF-Token', suite.client.csrfToken),
         )
       }),
       { numRuns: 30, seed: 20261203 },

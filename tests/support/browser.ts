@@ -20,6 +20,8 @@ export async function launchChromium(): Promise<{ context: BrowserContext; close
       '--disable-sync',
     ],
   })
+  // Every wait is for a state (a locator, a response); this only bounds how long a slow, busy machine may take.
+  context.setDefaultTimeout(60_000)
   return {
     context,
     async close() {

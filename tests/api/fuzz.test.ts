@@ -1,7 +1,7 @@
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { databaseFingerprint } from '../support/database-fingerprint.js'
-import { sampleLineset, type VenueFixture } from '../support/fixtures.js'
+import { sampleBrickType, sampleLineset, type VenueFixture } from '../support/fixtures.js'
 import { venueSuite } from '../support/venue-suite.js'
 
 // A few hundred generated bad bodies across every write route, sent by an administrator (who may call
@@ -45,27 +45,12 @@ const TARGETS: Target[] = [
   {
     method: 'post',
     path: () => '/api/v1/brick-types',
-    valid: () => ({
-      name: 'Fuzz',
-      material: 'Steel',
-      unitWeight: 20,
-      thickness: 2,
-      quantityOwned: 5,
-      unitSystem: 'imperial',
-    }),
+    valid: () => sampleBrickType('Fuzz'),
   },
   {
     method: 'put',
     path: (v) => `/api/v1/brick-types/${v.brickTypeId}`,
-    valid: () => ({
-      name: 'Full',
-      material: 'Steel',
-      unitWeight: 20,
-      thickness: 2,
-      quantityOwned: 5,
-      unitSystem: 'imperial',
-      version: 999,
-    }),
+    valid: () => sampleBrickType('Full', { version: 999 }),
   },
   {
     method: 'post',

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { ROLES, type Role } from '../../shared/schemas/role.js'
-import { sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
+import { sampleBrickType, sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
 import { Client, signedIn, startTestApp, type TestApp } from '../support/test-app.js'
 
 // One table: every route, the status each role gets. Writes that succeed are given bodies that are
@@ -103,28 +103,13 @@ const ROUTES: RouteCase[] = [
   {
     method: 'post',
     path: () => '/api/v1/brick-types',
-    body: (_f, role) => ({
-      name: `Brick ${role}`,
-      material: 'Steel',
-      unitWeight: 20,
-      thickness: 2,
-      quantityOwned: 5,
-      unitSystem: 'imperial',
-    }),
+    body: (_f, role) => sampleBrickType(`Brick ${role}`),
     expected: editors(201),
   },
   {
     method: 'put',
     path: (f) => `/api/v1/brick-types/${f.brickTypeId}`,
-    body: () => ({
-      name: 'Full',
-      material: 'Steel',
-      unitWeight: 20,
-      thickness: 2,
-      quantityOwned: 5,
-      unitSystem: 'imperial',
-      version: 999,
-    }),
+    body: () => sampleBrickType('Full', { version: 999 }),
     expected: editors(409),
   },
   { method: 'delete', path: () => '/api/v1/brick-types/00000000-0000-4000-8000-000000000000', expected: editors(404) },

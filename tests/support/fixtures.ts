@@ -35,6 +35,17 @@ export const sampleLineset = (number: number, overrides: Partial<LinesetInput> =
   ...overrides,
 })
 
+/** A brick type body in imperial units (invented test data). */
+export const sampleBrickType = (name: string, overrides: Record<string, unknown> = {}) => ({
+  name,
+  material: 'Steel',
+  unitWeight: 20,
+  thickness: 2,
+  quantityOwned: 5,
+  unitSystem: 'imperial' as const,
+  ...overrides,
+})
+
 export interface VenueFixture {
   venueId: string
   emails: Record<Role, string>

@@ -4,6 +4,7 @@ import type { AppContext } from './context.js'
 import type { Database } from './db/models.js'
 import { localFolderStorage } from './files/local-folder-storage.js'
 import { postgresLivePublisher } from './live/postgres-live.js'
+import { createCalculationPool } from './modules/calculations/calculation-pool.js'
 import { mailNotConfigured, smtpMailSender } from './mail/smtp-mail-sender.js'
 
 /** The parts a caller of `createApp` may replace (tests: a fixed clock, a temporary folder, another mailer). */
@@ -17,6 +18,7 @@ export function buildAppContext(config: Config, db: Database, overrides: AppOver
     live: overrides.live ?? postgresLivePublisher(db.sequelize),
     files: overrides.files ?? localFolderStorage(config.fileStorageDir),
     clock: overrides.clock ?? systemClock,
+    calculations: overrides.calculations ?? createCalculationPool(),
     publicUrl: overrides.publicUrl ?? config.publicUrl,
   }
 }

@@ -12,7 +12,7 @@ import { noStore, securityHeaders } from './http/headers.js'
 import { mountedRoutes, type MountedRoute } from './http/mounted-routes.js'
 import { sessionMiddleware } from './http/session.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
-import { createCalculationPool, type CalculationPool } from './modules/calculations/calculation-pool.js'
+import type { CalculationPool } from './modules/calculations/calculation-pool.js'
 import { calculationRoutes } from './modules/calculations/calculation.routes.js'
 import { itemTypeRoutes } from './modules/item-types/item-type.routes.js'
 import { hangRoutes } from './modules/hangs/hang.routes.js'
@@ -51,7 +51,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
   const sessions = sessionMiddleware(config, connections.sessionPool)
   const passport = createPassport(context)
   const csrf = csrfProtection(config)
-  const calculations = createCalculationPool()
+  const calculations = context.calculations
   const app = express()
 
   app.set('trust proxy', config.trustProxy)

@@ -7,6 +7,7 @@ import type { FileStorage } from './files/file-storage.js'
 import { currentUser } from './http/auth.js'
 import type { LivePublisher } from './live/live-publisher.js'
 import type { MailSender } from './mail/mail-sender.js'
+import type { CalculationPool } from './modules/calculations/calculation-pool.js'
 
 /** What the whole app shares, built once by `createApp` and handed to every module's routes. Holds no state. */
 export interface AppContext {
@@ -15,6 +16,8 @@ export interface AppContext {
   live: LivePublisher
   files: FileStorage
   clock: Clock
+  /** The engine's own thread: a save that computes a hang never holds the thread that answers everyone else. */
+  calculations: CalculationPool
   /** Where people reach the app, for links in e-mail (no trailing slash). */
   publicUrl: string
 }

@@ -11,11 +11,15 @@ import { signedIn, startTestApp, type Client, type TestApp } from '../support/te
 
 let app: TestApp
 let stageManager: Client
+let flyOperator: Client
+let linesetId: string
 
 beforeAll(async () => {
   app = await startTestApp()
   const venue = await seedVenue(app.handle.context, 'alpha')
   stageManager = await signedIn(app.url, venue.emails['stage-manager'])
+  flyOperator = await signedIn(app.url, venue.emails['fly-operator'])
+  linesetId = venue.linesetId
 })
 afterAll(async () => {
   app.handle.calculations.release()
@@ -52,6 +56,28 @@ describe('a worst-case calculation in flight', () => {
     const res = await slow.response
     expect(res.status).toBe(200)
     expect(res.body).toEqual(JSON.parse(JSON.stringify((runCalculation(worst) as { result: unknown }).result)))
+  })
+
+  it('when a hang is saved, then its engine runs on the calculation thread and other requests are answered meanwhile', async () => {
+    app.handle.calculations.hold()
+    const saving = send(
+      flyOperator.post(`/api/v1/linesets/${linesetId}/hangs`, {
+        title: 'Held save',
+        basedOnRevision: null,
+        unitSystem: 'imperial',
+        items: [{ label: 'Sandbag', category: 'hardware', weight: 25, at: 20 }],
+      }),
+    )
+    await untilWaiting(1)
+
+    const others = await Promise.all([stageManager.get('/api/v1/session'), stageManager.get('/api/v1/venue')])
+    expect(others.map((res) => res.status)).toEqual([200, 200])
+    expect(saving.answered).toBe(false)
+
+    app.handle.calculations.release()
+    const res = await saving.response
+    expect(res.status).toBe(201)
+    expect(res.body.revision).toBe(1)
   })
 
   it('when several of the heaviest calculations arrive at once, then every one is answered, in full', async () => {

@@ -1,4 +1,3 @@
-import { runCalculation } from '../../../shared/engine/calculate.js'
 import { positionsBeyondBatten } from '../../../shared/hang/entry-bounds.js'
 import { expandHangEntries, loadCount, type ExpansionProblem, type HangEntry } from '../../../shared/hang/hang-items.js'
 import { linesetCalculationInput } from '../../../shared/hang/lineset-calculation.js'
@@ -40,7 +39,7 @@ function engineFieldsByEntry(entries: readonly HangEntry[], fields: Record<strin
 
 /**
  * Expands the entries with this venue's library (another venue's or a retired item type is refused by name),
- * builds the engine input exactly as the client does, and runs the shared engine on it.
+ * builds the engine input exactly as the client does, and runs the shared engine on it on the calculation thread.
  */
 export async function computeHang(
   tx: TransactionContext,
@@ -58,7 +57,7 @@ export async function computeHang(
     brickTypes: await listBrickTypes(tx),
     items: expanded.items,
   })
-  const outcome = runCalculation(input)
+  const outcome = await tx.calculations.run(input)
   if (!outcome.ok) {
     const { code, message, fields } = outcome.error.error
     throw fields ? refused(engineFieldsByEntry(entries, fields)) : new AppError(400, code, message)

@@ -19,6 +19,20 @@ const ENTRIES: readonly NavigationEntry[] = [
   },
   { title: 'Bricks', icon: 'mdi-cube-outline', routeName: 'brick-types-list', testid: 'nav-bricks', roles: ROLES },
   {
+    title: 'Item library',
+    icon: 'mdi-bookshelf',
+    routeName: 'item-types-list',
+    testid: 'nav-item-library',
+    roles: ROLES,
+  },
+  {
+    title: 'Productions',
+    icon: 'mdi-drama-masks',
+    routeName: 'productions-list',
+    testid: 'nav-productions',
+    roles: ROLES,
+  },
+  {
     title: 'People',
     icon: 'mdi-account-group-outline',
     routeName: 'people-list',

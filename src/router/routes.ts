@@ -66,6 +66,18 @@ export const routes: RouteRecordRaw[] = [
     meta: { roles: INVENTORY_EDITORS, title: 'Venue settings' },
   },
   {
+    path: '/item-library',
+    name: 'item-types-list',
+    component: () => import('../views/ItemTypesListView.vue'),
+    meta: { roles: everyone, title: 'Item library' },
+  },
+  {
+    path: '/productions',
+    name: 'productions-list',
+    component: () => import('../views/ProductionsListView.vue'),
+    meta: { roles: everyone, title: 'Productions' },
+  },
+  {
     path: '/:pathMatch(.*)*',
     name: 'not-found',
     component: () => import('../views/NotFoundView.vue'),

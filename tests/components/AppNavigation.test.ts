@@ -25,18 +25,31 @@ async function navigationFor(role: Role) {
 }
 
 describe('AppNavigation', () => {
-  it('when a stage manager is signed in, then only the lineset and brick pages are offered', async () => {
-    expect(await navigationFor('stage-manager')).toEqual(['nav-linesets', 'nav-bricks'])
+  it('when a stage manager is signed in, then only the pages every role reads are offered', async () => {
+    expect(await navigationFor('stage-manager')).toEqual([
+      'nav-linesets',
+      'nav-bricks',
+      'nav-item-library',
+      'nav-productions',
+    ])
   })
 
   it('when a technical director is signed in, then venue settings are offered but people are not', async () => {
-    expect(await navigationFor('technical-director')).toEqual(['nav-linesets', 'nav-bricks', 'nav-venue-settings'])
+    expect(await navigationFor('technical-director')).toEqual([
+      'nav-linesets',
+      'nav-bricks',
+      'nav-item-library',
+      'nav-productions',
+      'nav-venue-settings',
+    ])
   })
 
   it('when an administrator is signed in, then every page is offered', async () => {
     expect(await navigationFor('administrator')).toEqual([
       'nav-linesets',
       'nav-bricks',
+      'nav-item-library',
+      'nav-productions',
       'nav-people',
       'nav-venue-settings',
     ])

@@ -69,11 +69,17 @@ describe('InvitationAcceptView', () => {
   it('when a new address chooses a password that breaks the rule, then the page says the rule and sends nothing', async () => {
     vi.mocked(invitationsApi.lookup).mockResolvedValue(preview())
     const { w } = await openInvitation()
-    expect(w.get('[data-testid="invitation-password"]').text()).toContain(PASSWORD_RULE)
+    const rule = w.get('[data-testid="invitation-password-rule"]')
+    expect(rule.text()).toBe(PASSWORD_RULE)
+    expect(w.get('[data-testid="invitation-password"] input').attributes('aria-describedby')).toBe(
+      rule.attributes('id'),
+    )
     await type(w, 'invitation-password', 'short')
     await w.get('form').trigger('submit')
     await flushPromises()
     expect(w.get('[data-testid="invitation-password"]').text()).toContain('At least 12 characters')
+    // The whole rule stays in view beside the message, not in place of it.
+    expect(w.get('[data-testid="invitation-password-rule"]').text()).toBe(PASSWORD_RULE)
     await type(w, 'invitation-password', 'New@Example.test')
     await w.get('form').trigger('submit')
     await flushPromises()
@@ -86,6 +92,7 @@ describe('InvitationAcceptView', () => {
     const { w } = await openInvitation()
     expect(w.find('[data-testid="invitation-name"]').exists()).toBe(false)
     expect(w.get('[data-testid="invitation-password"]').text()).toMatch(/Password of your account/)
+    expect(w.get('[data-testid="invitation-password-rule"]').text()).toMatch(/already has an account/)
 
     useSessionStore().user = { ...personWith('stage-manager'), email: 'new@example.test' }
     await flushPromises()

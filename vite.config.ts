@@ -39,6 +39,8 @@ export default defineConfig({
           environment: 'jsdom',
           include: ['tests/components/**/*.test.ts'],
           setupFiles: ['tests/support/dom.setup.ts'],
+          // A ceiling for a busy two-core machine (Vuetify mounts in jsdom are slow there), never a speed target.
+          testTimeout: 30000,
           server: { deps: { inline: ['vuetify'] } },
         },
       },

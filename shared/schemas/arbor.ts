@@ -48,5 +48,7 @@ export interface BrickStockLine {
   onArbors: number
   reserved: number
   inStorage: number
+  /** A retired type stays listed while any of its bricks are on an arbor or reserved. */
+  retired: boolean
   byLineset: { linesetId: string; number: number; name: string; count: number }[]
 }

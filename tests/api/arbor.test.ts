@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import type { BrickStockLine } from '../../shared/schemas/arbor.js'
 import { databaseFingerprint } from '../support/database-fingerprint.js'
 import { sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
 import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
@@ -28,9 +29,9 @@ const freshLineset = async (overrides = {}) =>
   (await director.post('/api/v1/linesets', sampleLineset(nextNumber++, overrides)).expect(201)).body.id as string
 const arborOf = (id: string) => `/api/v1/linesets/${id}/arbor`
 const stockOf = async (brickTypeId: string) =>
-  ((await director.get('/api/v1/brick-stock').expect(200)).body as { brickTypeId: string }[]).find(
+  ((await director.get('/api/v1/brick-stock').expect(200)).body as BrickStockLine[]).find(
     (line) => line.brickTypeId === brickTypeId,
-  )
+  )!
 
 describe('reading an arbor', () => {
   it('when nothing has been counted, then every brick type reads 0 at version 0, for every role', async () => {
@@ -77,10 +78,10 @@ describe('counting an arbor at the rail', () => {
     const after = await stockOf(alpha.brickTypeId)
     expect(after).toMatchObject({
       owned: 100,
-      onArbors: (before as { onArbors: number }).onArbors + 12,
-      inStorage: (before as { inStorage: number }).inStorage - 12,
+      onArbors: before.onArbors + 12,
+      inStorage: before.inStorage - 12,
     })
-    expect((after as { byLineset: object[] }).byLineset).toContainEqual(
+    expect(after.byLineset).toContainEqual(
       expect.objectContaining({ linesetId: id, number: nextNumber - 1, count: 12 }),
     )
     const events = (await stageManager.get(`/api/v1/linesets/${id}/events`).expect(200)).body.events
@@ -93,11 +94,11 @@ describe('counting an arbor at the rail', () => {
   it('when a brick type is left out of a count, then its bricks go back to storage', async () => {
     const id = await freshLineset()
     await director.put(arborOf(id), { version: 0, bricks: [{ brickTypeId: alpha.brickTypeId, count: 4 }] }).expect(200)
-    const storage = (await stockOf(alpha.brickTypeId)) as { inStorage: number }
+    const storage = await stockOf(alpha.brickTypeId)
     const res = await director.put(arborOf(id), { version: 1, bricks: [] })
     expect(res.status).toBe(200)
     expect(res.body.bricks).toEqual([{ brickTypeId: alpha.brickTypeId, name: 'Full', count: 0 }])
-    expect(((await stockOf(alpha.brickTypeId)) as { inStorage: number }).inStorage).toBe(storage.inStorage + 4)
+    expect((await stockOf(alpha.brickTypeId)).inStorage).toBe(storage.inStorage + 4)
   })
 
   it('when the count is based on an older arbor version, then it answers 409 and moves nothing', async () => {
@@ -116,7 +117,7 @@ describe('counting an arbor at the rail', () => {
 
   it('when storage holds fewer bricks than the count needs, then it answers 409 naming the type and how many are missing, and moves nothing', async () => {
     const id = await freshLineset()
-    const { inStorage } = (await stockOf(alpha.brickTypeId)) as { inStorage: number }
+    const { inStorage } = await stockOf(alpha.brickTypeId)
     const fingerprint = await databaseFingerprint(app.handle.db.sequelize)
     const res = await director.put(arborOf(id), {
       version: 0,
@@ -129,7 +130,7 @@ describe('counting an arbor at the rail', () => {
     )
     expect(Object.keys(res.body.error.fields)).toEqual(['bricks.0.count'])
     expect(await databaseFingerprint(app.handle.db.sequelize)).toBe(fingerprint)
-    expect(((await stockOf(alpha.brickTypeId)) as { inStorage: number }).inStorage).toBe(inStorage)
+    expect((await stockOf(alpha.brickTypeId)).inStorage).toBe(inStorage)
   })
 
   it.each([

@@ -11,6 +11,9 @@ import { apiNotFound, errorHandler } from './http/errors.js'
 import { noStore, securityHeaders } from './http/headers.js'
 import { mountedRoutes, type MountedRoute } from './http/mounted-routes.js'
 import { sessionMiddleware } from './http/session.js'
+import { arborRoutes } from './modules/arbors/arbor.routes.js'
+import { brickStockRoutes } from './modules/brick-stock/brick-stock.routes.js'
+import { lockoutRoutes } from './modules/lockouts/lockout.routes.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
 import type { CalculationPool } from './modules/calculations/calculation-pool.js'
 import { calculationRoutes } from './modules/calculations/calculation.routes.js'
@@ -69,6 +72,9 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/venue', venueRoutes(context)],
     ['/linesets', linesetRoutes(context)],
     ['/linesets', hangRoutes(context)],
+    ['/linesets', arborRoutes(context)],
+    ['/linesets', lockoutRoutes(context)],
+    ['/brick-stock', brickStockRoutes(context)],
     ['/brick-types', brickTypeRoutes(context)],
     ['/item-types', itemTypeRoutes(context)],
     ['/productions', productionRoutes(context)],

@@ -2,7 +2,14 @@ import type { Transaction } from 'sequelize'
 
 /** Something that changed, named so every open screen of the venue can read it again. */
 export interface LiveEvent {
-  type: 'lineset-added' | 'lineset-changed' | 'lineset-retired' | 'hang-saved'
+  type:
+    | 'lineset-added'
+    | 'lineset-changed'
+    | 'lineset-retired'
+    | 'hang-saved'
+    | 'arbor-counted'
+    | 'lineset-locked-out'
+    | 'lineset-released'
   venueId: string
   linesetId: string
 }

@@ -1,6 +1,8 @@
 import { z } from 'zod'
 import type { Quantity, UnitSystem } from '../units/systems.js'
 import type { CurrentHang } from './hang.js'
+import type { Lockout } from './lockout.js'
+import type { OperatingStatus } from './operating-status.js'
 import { pickPointProblems, SINGLE_LINE_HEMP_RULE, wrongLineCount } from './batten-rules.js'
 import { count, figure, optionalFigure, typedInField, versionField } from './quantity.js'
 import { COUNT_RANGES } from './ranges.js'
@@ -121,8 +123,17 @@ export interface Lineset extends LinesetInput {
   updatedAt: string
 }
 
+/** Whether a lineset may be operated now, and its lock-out if it has one (`GET /linesets` and `/linesets/:id`). */
+export interface LinesetOperating {
+  operatingStatus: OperatingStatus
+  lockout: Lockout | null
+}
+
+/** A lineset as `GET /api/v1/linesets/:id` answers it. */
+export interface LinesetDetail extends Lineset, LinesetOperating {}
+
 /** A lineset in the list, with what hangs on it now (its latest saved revision), if anything. */
-export interface LinesetListItem extends Lineset {
+export interface LinesetListItem extends LinesetDetail {
   currentHang: CurrentHang | null
 }
 

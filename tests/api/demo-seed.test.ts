@@ -29,6 +29,7 @@ describe('the demo venue', () => {
     const first = (await reader.get('/api/v1/linesets').expect(200)).body[0]
     const history = (await reader.get(`/api/v1/linesets/${first.id}/events`).expect(200)).body
     expect(history.events.map((e: { summary: string }) => e.summary)).toEqual([
+      expect.stringMatching(/^Counted the arbor at the rail: .+ 0 → \d+/),
       expect.stringMatching(/^Saved hang revision 1, “Main valance”: 1 item, [\d,.]+ lb in all$/),
       `Added as lineset 1, ${first.name}`,
     ])
@@ -55,5 +56,49 @@ describe('the demo venue', () => {
   it('when seeding is asked again, then it leaves the venue as it was', async () => {
     expect(await seedDemoIfEmpty(app.handle.context)).toBe(false)
     expect(await app.handle.db.models.Venue.count()).toBe(1)
+  })
+})
+
+describe('the demo arbors and brick stock', () => {
+  it('when the demo is seeded, then every hung counterweight set holds bricks and reads ready, and one spare is locked out', async () => {
+    const reader = await signedIn(app.url, 'sm@demo.test', DEMO_PASSWORD)
+    const linesets = (await reader.get('/api/v1/linesets').expect(200)).body as {
+      id: string
+      number: number
+      kind: string
+      status: string
+      operatingStatus: string
+      currentHang: object | null
+    }[]
+    const hungCounterweight = linesets.filter((l) => l.kind.startsWith('counterweight-') && l.currentHang)
+    expect(hungCounterweight.length).toBeGreaterThanOrEqual(10)
+    let loaded = 0
+    for (const lineset of hungCounterweight) {
+      const arbor = (await reader.get(`/api/v1/linesets/${lineset.id}/arbor`).expect(200)).body
+      if (arbor.bricks.some((brick: { count: number }) => brick.count > 0)) loaded++
+      if (lineset.status === 'in-service') expect(lineset.operatingStatus, `lineset ${lineset.number}`).toBe('ready')
+    }
+    expect(loaded).toBe(hungCounterweight.length)
+    expect(linesets.find((l) => l.number === 11)).toMatchObject({
+      operatingStatus: 'locked-out',
+      lockout: { reason: expect.stringMatching(/inspection booked/) },
+    })
+  })
+
+  it('when the demo stock is read, then each type owns more than is on arbors and the counts add up', async () => {
+    const reader = await signedIn(app.url, 'sm@demo.test', DEMO_PASSWORD)
+    const stock = (await reader.get('/api/v1/brick-stock').expect(200)).body as {
+      owned: number
+      onArbors: number
+      reserved: number
+      inStorage: number
+      byLineset: { count: number }[]
+    }[]
+    expect(stock.some((line) => line.onArbors > 0)).toBe(true)
+    for (const line of stock) {
+      expect(line.owned).toBeGreaterThan(line.onArbors)
+      expect(line.onArbors + line.reserved + line.inStorage).toBe(line.owned)
+      expect(line.byLineset.reduce((sum, l) => sum + l.count, 0)).toBe(line.onArbors)
+    }
   })
 })

@@ -53,6 +53,16 @@ const TARGETS: Target[] = [
     valid: () => sampleBrickType('Full', { version: 999 }),
   },
   {
+    method: 'put',
+    path: (v) => `/api/v1/linesets/${v.linesetId}/arbor`,
+    valid: (v) => ({ version: 999, bricks: [{ brickTypeId: v.brickTypeId, count: 3 }], note: 'Fuzz' }),
+  },
+  {
+    method: 'post',
+    path: (v) => `/api/v1/linesets/${v.linesetId}/lockout`,
+    valid: () => ({ reason: 'Fuzz' }),
+  },
+  {
     method: 'post',
     path: () => '/api/v1/item-types',
     valid: () => ({

@@ -29,3 +29,26 @@ describe('migrations', () => {
     }
   })
 })
+
+describe('migration 0005: arbor contents and the brick stock', () => {
+  it('when brick types exist before it, then every brick they own lands in storage and the identity holds', async () => {
+    const { sequelize, close } = connectDatabase(await createTestDatabase())
+    try {
+      const migrator = createMigrator(sequelize)
+      await migrator.down({ to: '0005-arbor-contents-brick-stock' })
+      await sequelize.query(`
+        INSERT INTO venues (id, name, unit_system, balance_tolerance, rope_lock_holding)
+          VALUES ('00000000-0000-4000-8000-000000000001', 'Before', 'metric', 4.5, 22.7);
+        INSERT INTO brick_types (venue_id, name, material, unit_weight, thickness, quantity_owned)
+          VALUES ('00000000-0000-4000-8000-000000000001', 'Old full', 'Steel', 9, 0.05, 320);`)
+      await migrator.up()
+      const [rows] = await sequelize.query(
+        'SELECT quantity_owned, on_arbors, reserved, in_storage FROM brick_types WHERE name = $1',
+        { bind: ['Old full'] },
+      )
+      expect(rows).toEqual([{ quantity_owned: 320, on_arbors: 0, reserved: 0, in_storage: 320 }])
+    } finally {
+      await close()
+    }
+  })
+})

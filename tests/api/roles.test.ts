@@ -113,6 +113,25 @@ const ROUTES: RouteCase[] = [
     expected: editors(409),
   },
   { method: 'delete', path: () => '/api/v1/brick-types/00000000-0000-4000-8000-000000000000', expected: editors(404) },
+  { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}/arbor`, expected: all(200) },
+  {
+    method: 'put',
+    path: (f) => `/api/v1/linesets/${f.linesetId}/arbor`,
+    body: (f) => ({ version: 999, bricks: [{ brickTypeId: f.brickTypeId, count: 1 }] }),
+    expected: editors(409),
+  },
+  {
+    method: 'post',
+    path: () => '/api/v1/linesets/00000000-0000-4000-8000-000000000000/lockout',
+    body: () => ({ reason: 'Roles' }),
+    expected: editors(404),
+  },
+  {
+    method: 'delete',
+    path: () => '/api/v1/linesets/00000000-0000-4000-8000-000000000000/lockout',
+    expected: editors(404),
+  },
+  { method: 'get', path: () => '/api/v1/brick-stock', expected: all(200) },
   { method: 'get', path: () => '/api/v1/item-types', expected: all(200) },
   {
     method: 'post',

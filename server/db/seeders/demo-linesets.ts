@@ -82,7 +82,8 @@ function figuresFor(plan: Plan, index: number): Omit<LinesetInput, 'number' | 'n
         arborCapacity: 1400,
         arborStackLength: 72,
         ratedLoad: 1200,
-        pipeWeight: 155,
+        // Pipe weight balances the empty batten: 48 ft x 2.72 lb/ft = 130.56 lb, less the 90 lb arbor frame.
+        pipeWeight: 40,
         travel: 56,
       }
     case 'counterweight-double':
@@ -95,7 +96,8 @@ function figuresFor(plan: Plan, index: number): Omit<LinesetInput, 'number' | 'n
         arborCapacity: 3000,
         arborStackLength: 84,
         ratedLoad: 1400,
-        pipeWeight: 320,
+        // Twice the empty batten (2 x 49 ft x 2.72 lb/ft = 266.56 lb), less the 110 lb arbor frame.
+        pipeWeight: 155,
         travel: 56,
       }
     case 'motorized':
@@ -146,5 +148,5 @@ export const DEMO_LINESETS: LinesetInput[] = HOUSE.map((plan, index) => ({
 export const DEMO_BRICK_TYPES: BrickTypeInput[] = [
   { name: 'Full steel brick', material: 'Steel', unitWeight: 19.5, thickness: 2, quantityOwned: 1400 },
   { name: 'Half steel brick', material: 'Steel', unitWeight: 9.75, thickness: 1, quantityOwned: 420 },
-  { name: 'Lead trim brick', material: 'Lead', unitWeight: 5, thickness: 0.5, quantityOwned: 60 },
+  { name: 'Lead trim brick', material: 'Lead', unitWeight: 5, thickness: 0.5, quantityOwned: 300 },
 ].map((brick) => ({ ...brick, unitSystem: 'imperial' }))

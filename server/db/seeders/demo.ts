@@ -13,6 +13,7 @@ import { createAccount, joinVenue, PASSWORD_HASH_ROUNDS } from '../../modules/pe
 import { createProduction } from '../../modules/productions/production.service.js'
 import { createVenue } from '../../modules/venues/venue.service.js'
 import { DEMO_BRICK_TYPES, DEMO_LINESETS } from './demo-linesets.js'
+import { seedDemoArbors, seedDemoLockout } from './demo-arbor-seeding.js'
 import { seedDemoHangs } from './demo-hang-seeding.js'
 import { DEMO_ITEM_TYPES } from './demo-item-types.js'
 import { demoProduction } from './demo-production.js'
@@ -65,6 +66,9 @@ export async function seedDemoIfEmpty(app: AppContext): Promise<boolean> {
     const show = await createProduction(asAdministrator, productionInputSchema.parse(demoProduction(app.clock.now())))
     const asFlyOperator = { ...app, actor: members.get('fly-operator')!, transaction }
     await seedDemoHangs(asFlyOperator, linesets, library, show.id)
+    const asDirector = { ...app, actor: members.get('technical-director')!, transaction }
+    await seedDemoArbors(asDirector)
+    await seedDemoLockout(asDirector, linesets)
   })
   return true
 }

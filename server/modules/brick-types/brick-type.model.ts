@@ -18,6 +18,10 @@ export function defineBrickTypeModel(sequelize: Sequelize) {
     declare unitWeight: string
     declare thickness: string
     declare quantityOwned: number
+    /** Where the owned bricks are; the database holds quantityOwned = onArbors + reserved + inStorage. */
+    declare onArbors: CreationOptional<number>
+    declare reserved: CreationOptional<number>
+    declare inStorage: number
     /** Set once the type is taken out of the lists; a type something refers to is retired, never deleted. */
     declare retiredAt: Date | null
     declare version: CreationOptional<number>
@@ -33,6 +37,9 @@ export function defineBrickTypeModel(sequelize: Sequelize) {
       unitWeight: requiredDecimal(),
       thickness: requiredDecimal(),
       quantityOwned: { type: DataTypes.INTEGER, allowNull: false },
+      onArbors: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      reserved: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      inStorage: { type: DataTypes.INTEGER, allowNull: false },
       retiredAt: { type: DataTypes.DATE, allowNull: true },
       ...lockVersion(),
       ...timestamps(),

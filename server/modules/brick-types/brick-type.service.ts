@@ -1,3 +1,4 @@
+import { Op } from 'sequelize'
 import type { BrickType, BrickTypeInput, BrickTypeUpdate } from '../../../shared/schemas/brick-type.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 import { inTransaction, type ServiceContext, type TransactionContext } from '../../context.js'
@@ -58,7 +59,8 @@ export function createBrickType(ctx: ServiceContext, body: BrickTypeInput): Prom
     const system = await unitsTypedIn(tx, body.unitSystem)
     await refuseTakenName(tx, body.name)
     const row = await tx.db.models.BrickType.create(
-      { ...fromApi(body, system), venueId: tx.actor.venueId, retiredAt: null },
+      // A new type's bricks all start in storage.
+      { ...fromApi(body, system), inStorage: body.quantityOwned, venueId: tx.actor.venueId, retiredAt: null },
       { transaction: tx.transaction },
     )
     return toApi(row, system)
@@ -73,6 +75,23 @@ async function refuseUnknown(tx: TransactionContext, id: string) {
   if (!found) throw notFound('That brick type')
 }
 
+/** Why a conditional update took no row: gone (404), saved by someone else (409), or fewer owned than in use. */
+async function refuseFailedUpdate(tx: TransactionContext, id: string, body: BrickTypeUpdate): Promise<never> {
+  const row = await tx.db.models.BrickType.findOne({
+    where: { id, ...active(tx.actor.venueId) },
+    transaction: tx.transaction,
+  })
+  if (!row) throw notFound('That brick type')
+  if (row.version !== body.version) throw staleVersion(`Brick type "${body.name}"`)
+  const inUse = row.onArbors + row.reserved
+  throw new AppError(
+    409,
+    'bricks_in_use',
+    `"${row.name}": ${row.onArbors} are on arbors and ${row.reserved} reserved, so the house must own at least ${inUse}`,
+    { quantityOwned: `At least ${inUse}: ${row.onArbors} on arbors, ${row.reserved} reserved` },
+  )
+}
+
 /** Saves a brick type if nobody changed it since `version` was read (else 409). Answers from the row written. */
 export function updateBrickType(ctx: ServiceContext, id: string, body: BrickTypeUpdate): Promise<BrickType> {
   return inTransaction(ctx, async (tx) => {
@@ -80,14 +99,22 @@ export function updateBrickType(ctx: ServiceContext, id: string, body: BrickType
     await refuseUnknown(tx, id)
     await refuseTakenName(tx, body.name, id)
     const { version, unitSystem: _typedIn, ...fields } = body
+    const owned = Number(body.quantityOwned)
+    const { literal } = tx.db.sequelize
+    // Bricks bought or sold go into or out of storage; those on arbors or reserved stay where they are.
     const [count, rows] = await tx.db.models.BrickType.update(
-      { ...fromApi(fields, system), version: version + 1 },
-      { where: { id, version, ...active(tx.actor.venueId) }, transaction: tx.transaction, returning: true },
+      {
+        ...fromApi(fields, system),
+        inStorage: literal(`in_storage + (${owned} - quantity_owned)`),
+        version: version + 1,
+      },
+      {
+        where: { id, version, ...active(tx.actor.venueId), [Op.and]: literal(`on_arbors + reserved <= ${owned}`) },
+        transaction: tx.transaction,
+        returning: true,
+      },
     )
-    if (count === 0) {
-      await refuseUnknown(tx, id) // retired meanwhile: 404; otherwise someone saved first
-      throw staleVersion(`Brick type "${body.name}"`)
-    }
+    if (count === 0) await refuseFailedUpdate(tx, id, body)
     return toApi(rows[0]!, system)
   })
 }

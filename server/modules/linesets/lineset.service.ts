@@ -1,13 +1,24 @@
-import type { Lineset, LinesetInput, LinesetListItem, LinesetUpdate } from '../../../shared/schemas/lineset.js'
+import type {
+  Lineset,
+  LinesetDetail,
+  LinesetInput,
+  LinesetListItem,
+  LinesetOperating,
+  LinesetUpdate,
+} from '../../../shared/schemas/lineset.js'
 import { inTransaction, type ServiceContext, type TransactionContext } from '../../context.js'
 import { AppError, notFound, staleVersion } from '../../http/errors.js'
 import { currentHangs } from '../hangs/current-hangs.js'
 import { unitsTypedIn } from '../venues/units.js'
 import { venueUnitSystem } from '../venues/venue.service.js'
 import { recordLinesetChange } from './lineset-history.js'
+import { operatingStates } from './operating-states.js'
 import { changedFields, linesetFromApi, linesetToApi, storedFromRow } from './lineset.mapper.js'
 
 const active = (venueId: string) => ({ venueId, retiredAt: null })
+
+// A lineset added between the two reads: nothing is known against it yet.
+const UNKNOWN_STATE: LinesetOperating = { operatingStatus: 'ready', lockout: null }
 
 /** Every lineset in service or not, in number order, with its latest saved hang; retired ones are history only. */
 export async function listLinesets(ctx: ServiceContext): Promise<LinesetListItem[]> {
@@ -18,7 +29,12 @@ export async function listLinesets(ctx: ServiceContext): Promise<LinesetListItem
     transaction: ctx.transaction,
   })
   const hangs = await currentHangs(ctx, system)
-  return rows.map((row) => ({ ...linesetToApi(row, system), currentHang: hangs.get(row.id) ?? null }))
+  const states = await operatingStates(ctx)
+  return rows.map((row) => ({
+    ...linesetToApi(row, system),
+    ...(states.get(row.id) ?? UNKNOWN_STATE),
+    currentHang: hangs.get(row.id) ?? null,
+  }))
 }
 
 async function findOwn(ctx: ServiceContext, id: string) {
@@ -30,9 +46,12 @@ async function findOwn(ctx: ServiceContext, id: string) {
   return row
 }
 
-export async function getLineset(ctx: ServiceContext, id: string): Promise<Lineset> {
+/** One lineset with its operating status and lock-out. */
+export async function getLineset(ctx: ServiceContext, id: string): Promise<LinesetDetail> {
   const system = await venueUnitSystem(ctx)
-  return linesetToApi(await findOwn(ctx, id), system)
+  const row = await findOwn(ctx, id)
+  const states = await operatingStates(ctx, id)
+  return { ...linesetToApi(row, system), ...(states.get(id) ?? UNKNOWN_STATE) }
 }
 
 async function refuseTakenNumber(tx: TransactionContext, number: number, exceptId?: string) {

@@ -1,0 +1,111 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest'
+import { databaseFingerprint } from '../support/database-fingerprint.js'
+import { sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
+import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+
+let app: TestApp
+let alpha: VenueFixture
+let director: Client
+let administrator: Client
+let operator: Client
+let stageManager: Client
+let otherVenue: Client
+
+beforeAll(async () => {
+  app = await startTestApp()
+  alpha = await seedVenue(app.handle.context, 'alpha')
+  const beta = await seedVenue(app.handle.context, 'beta')
+  director = await signedIn(app.url, alpha.emails['technical-director'])
+  administrator = await signedIn(app.url, alpha.emails.administrator)
+  operator = await signedIn(app.url, alpha.emails['fly-operator'])
+  stageManager = await signedIn(app.url, alpha.emails['stage-manager'])
+  otherVenue = await signedIn(app.url, beta.emails.administrator)
+})
+afterAll(() => app.stop())
+
+let nextNumber = 500
+const freshLineset = async () =>
+  (await director.post('/api/v1/linesets', sampleLineset(nextNumber++)).expect(201)).body.id as string
+const lockoutOf = (id: string) => `/api/v1/linesets/${id}/lockout`
+
+describe('locking a lineset out', () => {
+  it('when a technical director locks a set out, then every list shows it locked out with the reason, who and when', async () => {
+    const id = await freshLineset()
+    const res = await director.post(lockoutOf(id), { reason: 'Lift line frayed at the head block' })
+    expect(res.status, res.text).toBe(201)
+    expect(res.body).toEqual({
+      reason: 'Lift line frayed at the head block',
+      at: expect.any(String),
+      by: { id: alpha.members['technical-director'].id, name: alpha.members['technical-director'].name },
+    })
+    const listed = (await stageManager.get('/api/v1/linesets').expect(200)).body.find(
+      (l: { id: string }) => l.id === id,
+    )
+    expect(listed).toMatchObject({ operatingStatus: 'locked-out', lockout: res.body })
+    expect((await stageManager.get(`/api/v1/linesets/${id}`).expect(200)).body).toMatchObject({
+      operatingStatus: 'locked-out',
+      lockout: res.body,
+    })
+  })
+
+  it('when a locked-out set is locked again, then it answers 409 and writes nothing', async () => {
+    const id = await freshLineset()
+    await director.post(lockoutOf(id), { reason: 'Arbor rail bent' }).expect(201)
+    const fingerprint = await databaseFingerprint(app.handle.db.sequelize)
+    const again = await administrator.post(lockoutOf(id), { reason: 'Something else' })
+    expect(again.status).toBe(409)
+    expect(again.body.error).toMatchObject({
+      code: 'already_locked_out',
+      message: expect.stringMatching(/Arbor rail bent/),
+    })
+    expect(await databaseFingerprint(app.handle.db.sequelize)).toBe(fingerprint)
+  })
+
+  it('when ten lock-outs of one set race, then exactly one takes effect and one ledger entry is written', async () => {
+    const id = await freshLineset()
+    const answers = await Promise.all(
+      Array.from({ length: 10 }, (_, i) => director.post(lockoutOf(id), { reason: `Reason ${i}` })),
+    )
+    expect(answers.filter((res) => res.status === 201)).toHaveLength(1)
+    expect(answers.filter((res) => res.status === 409)).toHaveLength(9)
+    const events = (await director.get(`/api/v1/linesets/${id}/events`).expect(200)).body.events
+    expect(events.filter((e: { type: string }) => e.type === 'lineset-locked-out')).toHaveLength(1)
+  })
+
+  it('when the lock-out is released, then the set is ready again and the history says both in words', async () => {
+    const id = await freshLineset()
+    await director.post(lockoutOf(id), { reason: 'Inspection due' }).expect(201)
+    await administrator.delete(lockoutOf(id)).expect(204)
+    expect((await director.get(`/api/v1/linesets/${id}`)).body).toMatchObject({
+      operatingStatus: 'ready',
+      lockout: null,
+    })
+    const events = (await stageManager.get(`/api/v1/linesets/${id}/events`).expect(200)).body.events
+    expect(events.slice(0, 2).map((e: { summary: string }) => e.summary)).toEqual([
+      'Lock-out released (it was: Inspection due)',
+      'Locked out: Inspection due',
+    ])
+    const again = await director.delete(lockoutOf(id))
+    expect(again.status).toBe(409)
+    expect(again.body.error.code).toBe('not_locked_out')
+  })
+
+  it('when the reason is missing or blank, then it answers 400 naming reason', async () => {
+    const id = await freshLineset()
+    for (const body of [{}, { reason: '   ' }, { reason: 'a\u0000b' }]) {
+      const res = await director.post(lockoutOf(id), body)
+      expect(res.status).toBe(400)
+      expect(Object.keys(res.body.error.fields)).toEqual(['reason'])
+    }
+  })
+
+  it('when a fly operator or stage manager locks or releases, then it answers 403; another venue gets 404', async () => {
+    const id = await freshLineset()
+    for (const client of [operator, stageManager]) {
+      expect((await client.post(lockoutOf(id), { reason: 'No' })).status).toBe(403)
+      expect((await client.delete(lockoutOf(id))).status).toBe(403)
+    }
+    expect((await otherVenue.post(lockoutOf(id), { reason: 'No' })).status).toBe(404)
+    expect((await otherVenue.delete(lockoutOf(id))).status).toBe(404)
+  })
+})

@@ -2,6 +2,7 @@ import foundation from './0001-foundation.js'
 import venueBoundTicketsRetiredBricksInvitations from './0002-venue-bound-tickets-retired-bricks-invitations.js'
 import itemLibraryProductions from './0003-item-library-productions.js'
 import hangRevisions from './0004-hang-revisions.js'
+import mailOutbox from './0006-mail-outbox.js'
 
 export interface Migration {
   name: string
@@ -16,4 +17,5 @@ export const migrations: Migration[] = [
   venueBoundTicketsRetiredBricksInvitations,
   itemLibraryProductions,
   hangRevisions,
+  mailOutbox,
 ]

@@ -34,17 +34,19 @@ const later = (now: Date, seconds: number) => new Date(now.getTime() + seconds *
  * Claims waiting messages that are due (only those in `ids` when given), at most `limit`: each gets its next
  * attempt counted and its next_attempt_at moved past the time a send can take, in one statement. Rows another
  * process holds are skipped (`FOR UPDATE SKIP LOCKED`), and a row it has claimed is no longer due, so two
- * processes never claim one message at once.
+ * processes never claim one message at once. The choice is a materialized CTE: a LIMIT ... SKIP LOCKED
+ * subquery inside `WHERE id IN (...)` may be run more than once by the planner and claim more than the limit.
  */
 async function claim(parts: DeliveryParts, limit: number, ids?: readonly string[]): Promise<ClaimedMessage[]> {
   const now = parts.clock.now()
   const only = ids ? 'AND id IN (:ids)' : ''
   return parts.db.sequelize.query<ClaimedMessage>(
-    `UPDATE mail_outbox SET attempts = attempts + 1, next_attempt_at = :claimedUntil, updated_at = :now
-      WHERE id IN (SELECT id FROM mail_outbox WHERE state = 'waiting' AND next_attempt_at <= :now ${only}
-                    ORDER BY next_attempt_at, id LIMIT :limit FOR UPDATE SKIP LOCKED)
-        AND state = 'waiting' AND next_attempt_at <= :now
-      RETURNING id, recipients, subject, body_text AS text, attempts`,
+    `WITH due AS MATERIALIZED (
+       SELECT id FROM mail_outbox WHERE state = 'waiting' AND next_attempt_at <= :now ${only}
+        ORDER BY next_attempt_at, id LIMIT :limit FOR UPDATE SKIP LOCKED)
+     UPDATE mail_outbox SET attempts = attempts + 1, next_attempt_at = :claimedUntil, updated_at = :now
+       FROM due WHERE mail_outbox.id = due.id AND state = 'waiting' AND next_attempt_at <= :now
+      RETURNING mail_outbox.id, recipients, subject, body_text AS text, attempts`,
     { replacements: { now, claimedUntil: later(now, CLAIM_SECONDS), limit, ids: ids ?? [] }, type: QueryTypes.SELECT },
   )
 }

@@ -38,6 +38,7 @@ describe('AppNavigation', () => {
       'nav-linesets',
       'nav-bricks',
       'nav-people',
+      'nav-outbox',
       'nav-venue-settings',
     ])
   })

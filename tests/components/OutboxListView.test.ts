@@ -65,10 +65,13 @@ describe('OutboxListView', () => {
     expect(first.get('[data-testid="outbox-recipients"]').text()).toBe('To new.hand@example.test, td@example.test')
     expect(first.get('[data-testid="outbox-subject"]').text()).toBe('Join Harbour Street Playhouse on Loftledger')
     expect(first.get('[data-testid="outbox-times"]').text()).toContain('2 attempts')
+    expect(first.get('[data-testid="outbox-last-error"]').text()).toBe(
+      'Last attempt: The mail server did not take the message: connect ECONNREFUSED 127.0.0.1:2525',
+    )
     expect(outboxApi.list).toHaveBeenCalledWith({ limit: 50 })
   })
 
-  it('when a waiting message is opened, then its text, its last error and when it is tried again are shown', async () => {
+  it('when a waiting message is opened, then its text and when it is tried again are shown', async () => {
     vi.mocked(outboxApi.get).mockResolvedValue({
       ...waiting,
       text: 'Hello,\n\nTo accept, open this link:\nhttp://127.0.0.1:3000/invitation/abc',
@@ -81,7 +84,6 @@ describe('OutboxListView', () => {
     expect(w.get('[data-testid="outbox-body"]').text()).toBe(
       'Hello,\n\nTo accept, open this link:\nhttp://127.0.0.1:3000/invitation/abc',
     )
-    expect(w.get('[data-testid="outbox-last-error"]').text()).toContain('connect ECONNREFUSED')
     expect(w.get('[data-testid="outbox-next-attempt"]').text()).toMatch(/^Tried again from 14 Mar 2031/)
   })
 

@@ -21,6 +21,7 @@ import { itemTypeRoutes } from './modules/item-types/item-type.routes.js'
 import { hangRoutes } from './modules/hangs/hang.routes.js'
 import { invitationRoutes } from './modules/invitations/invitation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
+import { outboxRoutes } from './modules/outbox/outbox.routes.js'
 import { peopleRoutes } from './modules/people/people.routes.js'
 import { productionRoutes } from './modules/productions/production.routes.js'
 import { createPassport } from './modules/session/passport.js'
@@ -80,6 +81,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/productions', productionRoutes(context)],
     ['/people', peopleRoutes(context)],
     ['/invitations', invitationRoutes(context, csrf)],
+    ['/outbox', outboxRoutes(context)],
     ['/calculations', calculationRoutes(calculations)],
   ] as const
   for (const [path, router] of mounts) api.use(path, router)
@@ -102,6 +104,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     routes: mountedRoutes('/api/v1', mounts),
     calculations,
     close: async () => {
+      await context.outbox.close()
       await calculations.close()
       await sessions.close()
       await context.mail.close()

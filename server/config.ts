@@ -1,5 +1,6 @@
 import { resolve } from 'node:path'
 import { z } from 'zod'
+import type { OutboxPolicy } from './modules/outbox/outbox-policy.js'
 
 /** Everything the server reads from its environment, validated once at start into one frozen object. */
 const configSchema = z.object({
@@ -34,6 +35,16 @@ const configSchema = z.object({
   PUBLIC_URL: z.url({ protocol: /^https?$/, error: 'PUBLIC_URL must be an http:// or https:// URL' }).optional(),
   /** The folder uploaded files are kept in. */
   FILE_STORAGE_DIR: z.string().min(1).default('.data/files'),
+  /** How often every app process looks for outgoing mail that is due, in milliseconds. */
+  MAIL_SWEEP_INTERVAL_MS: z.coerce.number().int().min(10).max(3_600_000).default(15_000),
+  /** The most messages one look sends at once. */
+  MAIL_BATCH_SIZE: z.coerce.number().int().min(1).max(200).default(20),
+  /** Attempts before a message is given up (failed for good). */
+  MAIL_MAX_ATTEMPTS: z.coerce.number().int().min(1).max(50).default(10),
+  /** The wait after the first failed attempt, in seconds; it doubles after each further one ... */
+  MAIL_RETRY_FIRST_SECONDS: z.coerce.number().int().min(1).max(86_400).default(30),
+  /** ... up to this many seconds. */
+  MAIL_RETRY_LONGEST_SECONDS: z.coerce.number().int().min(1).max(86_400).default(3_600),
 })
 
 export type Config = Readonly<{
@@ -53,6 +64,7 @@ export type Config = Readonly<{
   publicUrl: string
   /** Absolute. */
   fileStorageDir: string
+  outbox: OutboxPolicy
 }>
 
 /**
@@ -80,5 +92,12 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     mailFrom: value.MAIL_FROM,
     publicUrl: (value.PUBLIC_URL ?? `http://${value.HOST}:${value.PORT}`).replace(/\/+$/, ''),
     fileStorageDir: resolve(value.FILE_STORAGE_DIR),
+    outbox: Object.freeze({
+      sweepIntervalMs: value.MAIL_SWEEP_INTERVAL_MS,
+      batchSize: value.MAIL_BATCH_SIZE,
+      maxAttempts: value.MAIL_MAX_ATTEMPTS,
+      firstRetrySeconds: value.MAIL_RETRY_FIRST_SECONDS,
+      longestRetrySeconds: Math.max(value.MAIL_RETRY_LONGEST_SECONDS, value.MAIL_RETRY_FIRST_SECONDS),
+    }),
   })
 }

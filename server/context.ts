@@ -8,11 +8,14 @@ import { currentUser } from './http/auth.js'
 import type { LivePublisher } from './live/live-publisher.js'
 import type { MailSender } from './mail/mail-sender.js'
 import type { CalculationPool } from './modules/calculations/calculation-pool.js'
+import type { OutboxCourier } from './modules/outbox/outbox-courier.js'
 
 /** What the whole app shares, built once by `createApp` and handed to every module's routes. Holds no state. */
 export interface AppContext {
   db: Database
   mail: MailSender
+  /** Delivers the mail outbox; services queue mail with `queueMail` (server/modules/outbox/), never send it. */
+  outbox: OutboxCourier
   live: LivePublisher
   files: FileStorage
   clock: Clock

@@ -39,6 +39,8 @@ export async function startServer(config: Config, overrides?: AppOverrides): Pro
   try {
     await migrate(handle.db.sequelize, config.databaseUrl)
     const server = await listen(handle, config.host, config.port)
+    // Only now is the outbox table sure to be there: the sweep starts after migrating.
+    handle.context.outbox.start()
     const { port } = server.address() as AddressInfo
     const stop = async () => {
       await new Promise<void>((resolve) => {

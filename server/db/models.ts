@@ -9,6 +9,7 @@ import { defineWeightChangeTicketModel } from '../modules/tickets/weight-change-
 import { defineBrickTypeModel } from '../modules/brick-types/brick-type.model.js'
 import { defineLinesetEventModel } from '../modules/ledger/lineset-event.model.js'
 import { defineLinesetModel } from '../modules/linesets/lineset.model.js'
+import { defineOutboxModel } from '../modules/outbox/outbox.model.js'
 import { defineMembershipModel } from '../modules/people/membership.model.js'
 import { defineUserModel } from '../modules/people/user.model.js'
 import { defineVenueModel } from '../modules/venues/venue.model.js'
@@ -29,6 +30,7 @@ export function defineModels(sequelize: Sequelize) {
     Invitation: defineInvitationModel(sequelize),
     ItemType: defineItemTypeModel(sequelize),
     Production: defineProductionModel(sequelize),
+    Outbox: defineOutboxModel(sequelize),
   }
   models.Membership.belongsTo(models.User, { foreignKey: 'userId', as: 'user' })
   models.User.hasMany(models.Membership, { foreignKey: 'userId', as: 'memberships' })

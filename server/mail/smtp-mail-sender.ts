@@ -1,23 +1,25 @@
 import nodemailer from 'nodemailer'
-import { AppError } from '../http/errors.js'
 import type { MailSender } from './mail-sender.js'
+
+/**
+ * How long one send may take at each stage. nodemailer's own defaults allow minutes; a message is claimed in
+ * the outbox for longer than these add up to (see `CLAIM_SECONDS`), so no other process sends it meanwhile.
+ */
+export const SMTP_TIMEOUTS_MS = { connectionTimeout: 10_000, greetingTimeout: 10_000, socketTimeout: 30_000 }
 
 /**
  * Sends through the SMTP server at `url` (`smtp://` or `smtps://`, options as query parameters: the local
  * sink's URL carries `ignoreTLS=true`, because its bundled certificate cannot be trusted).
  */
 export function smtpMailSender(url: string, from: string): MailSender {
-  const transport = nodemailer.createTransport(url)
+  const transport = nodemailer.createTransport({ url, ...SMTP_TIMEOUTS_MS })
   return {
+    configured: true,
     async send(message) {
       try {
-        await transport.sendMail({ from, ...message })
+        await transport.sendMail({ from, to: [...[message.to].flat()], subject: message.subject, text: message.text })
       } catch (error) {
-        throw new AppError(
-          503,
-          'mail_unavailable',
-          `The e-mail could not be sent (${error instanceof Error ? error.message : 'mail server unreachable'}); try again shortly`,
-        )
+        throw new Error(`The mail server did not take the message: ${describe(error)}`)
       }
     },
     async close() {
@@ -26,14 +28,13 @@ export function smtpMailSender(url: string, from: string): MailSender {
   }
 }
 
-/** Without SMTP_URL the app runs, and anything that must send mail is refused with a clear 503. */
+const describe = (error: unknown) => (error instanceof Error ? error.message : 'mail server unreachable')
+
+/** Without SMTP_URL the app runs, and every attempt to send says why nothing can be. */
 export const mailNotConfigured: MailSender = {
+  configured: false,
   async send() {
-    throw new AppError(
-      503,
-      'mail_unavailable',
-      'This server has no mail server configured (SMTP_URL), so it cannot send e-mail',
-    )
+    throw new Error('This server has no mail server configured (SMTP_URL)')
   },
   async close() {},
 }

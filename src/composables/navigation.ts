@@ -1,5 +1,5 @@
 import type { Role } from '../../shared/schemas/index.js'
-import { INVENTORY_EDITORS, PEOPLE_MANAGERS, ROLES } from '../../shared/schemas/index.js'
+import { INVENTORY_EDITORS, OUTBOX_READERS, PEOPLE_MANAGERS, ROLES } from '../../shared/schemas/index.js'
 
 export interface NavigationEntry {
   title: string
@@ -38,6 +38,13 @@ const ENTRIES: readonly NavigationEntry[] = [
     routeName: 'people-list',
     testid: 'nav-people',
     roles: PEOPLE_MANAGERS,
+  },
+  {
+    title: 'Outgoing mail',
+    icon: 'mdi-email-fast-outline',
+    routeName: 'outbox-list',
+    testid: 'nav-outbox',
+    roles: OUTBOX_READERS,
   },
   {
     title: 'Venue settings',

@@ -1,5 +1,5 @@
 import type { RouteRecordRaw } from 'vue-router'
-import { INVENTORY_EDITORS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/index.js'
+import { INVENTORY_EDITORS, OUTBOX_READERS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/index.js'
 
 declare module 'vue-router' {
   interface RouteMeta {
@@ -58,6 +58,12 @@ export const routes: RouteRecordRaw[] = [
     name: 'people-list',
     component: () => import('../views/PeopleListView.vue'),
     meta: { roles: PEOPLE_MANAGERS, title: 'People' },
+  },
+  {
+    path: '/outbox',
+    name: 'outbox-list',
+    component: () => import('../views/OutboxListView.vue'),
+    meta: { roles: OUTBOX_READERS, title: 'Outgoing mail' },
   },
   {
     path: '/venue',

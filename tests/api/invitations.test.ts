@@ -51,8 +51,8 @@ describe('adding a person reveals nothing about accounts elsewhere', () => {
     const people = (await alphaAdmin.get('/api/v1/people').expect(200)).body as Array<{ email: string }>
     expect(people.map((p) => p.email)).not.toContain(known)
     // Both addresses got the same invitation, each with its own link.
-    expect(app.mailbox.latestTo(known).subject).toBe(app.mailbox.latestTo(unknown).subject)
-    expect(app.mailbox.invitationTokenFor(known)).not.toBe(app.mailbox.invitationTokenFor(unknown))
+    expect((await app.mailbox.latestTo(known)).subject).toBe((await app.mailbox.latestTo(unknown)).subject)
+    expect(await app.mailbox.invitationTokenFor(known)).not.toBe(await app.mailbox.invitationTokenFor(unknown))
   })
 
   it('when an address already has a role in this venue, then it answers 409 on the e-mail field', async () => {
@@ -83,7 +83,7 @@ describe('accepting an invitation', () => {
 
   it('when a new address chooses a short password, then it answers 400 on the password field and nobody joins', async () => {
     await alphaAdmin.post('/api/v1/people', { email: 'short@alpha.test', name: 'Short', role: 'stage-manager' })
-    const token = app.mailbox.invitationTokenFor('short@alpha.test')
+    const token = await app.mailbox.invitationTokenFor('short@alpha.test')
     const res = await (await visitor()).post('/api/v1/invitations/accept', { token, password: 'too-short' })
     expect(res.status).toBe(400)
     expect(res.body.error.fields).toEqual({ password: 'At least 12 characters' })
@@ -95,7 +95,7 @@ describe('accepting an invitation', () => {
     await alphaAdmin
       .post('/api/v1/people', { email, name: 'Whatever the admin typed', role: 'fly-operator' })
       .expect(201)
-    const token = app.mailbox.invitationTokenFor(email)
+    const token = await app.mailbox.invitationTokenFor(email)
     const stranger = await visitor()
     const preview = (await stranger.post('/api/v1/invitations/lookup', { token }).expect(200)).body
     expect(preview).toMatchObject({ email, venueName: 'Venue alpha', role: 'fly-operator', hasAccount: true })
@@ -131,7 +131,7 @@ describe('accepting an invitation', () => {
 
   it('when the same link is accepted ten times at once, then exactly one succeeds and one account joins once', async () => {
     await alphaAdmin.post('/api/v1/people', { email: 'race@alpha.test', name: 'Race', role: 'stage-manager' })
-    const token = app.mailbox.invitationTokenFor('race@alpha.test')
+    const token = await app.mailbox.invitationTokenFor('race@alpha.test')
     const clients = await Promise.all(Array.from({ length: 10 }, visitor))
     const answers = await Promise.all(
       clients.map((client) => client.post('/api/v1/invitations/accept', { token, password: NEW_PASSWORD })),
@@ -147,7 +147,7 @@ describe('accepting an invitation', () => {
     const sent = (
       await alphaAdmin.post('/api/v1/people', { email: 'withdrawn@alpha.test', name: 'W', role: 'stage-manager' })
     ).body
-    const token = app.mailbox.invitationTokenFor('withdrawn@alpha.test')
+    const token = await app.mailbox.invitationTokenFor('withdrawn@alpha.test')
     await alphaAdmin.delete(`/api/v1/invitations/${sent.id}`).expect(204)
     expect((await alphaAdmin.delete(`/api/v1/invitations/${sent.id}`)).status).toBe(404)
     const res = await (await visitor()).post('/api/v1/invitations/accept', { token, password: NEW_PASSWORD })
@@ -158,9 +158,9 @@ describe('accepting an invitation', () => {
 
   it('when an address is invited again, then only the newest link works', async () => {
     await alphaAdmin.post('/api/v1/people', { email: 'twice@alpha.test', name: 'T', role: 'stage-manager' }).expect(201)
-    const first = app.mailbox.invitationTokenFor('twice@alpha.test')
+    const first = await app.mailbox.invitationTokenFor('twice@alpha.test')
     await alphaAdmin.post('/api/v1/people', { email: 'twice@alpha.test', name: 'T', role: 'fly-operator' }).expect(201)
-    const second = app.mailbox.invitationTokenFor('twice@alpha.test')
+    const second = await app.mailbox.invitationTokenFor('twice@alpha.test')
     expect((await (await visitor()).post('/api/v1/invitations/lookup', { token: first })).status).toBe(410)
     const preview = await (await visitor()).post('/api/v1/invitations/lookup', { token: second })
     expect(preview.body.role).toBe('fly-operator')
@@ -191,7 +191,7 @@ describe('an invitation past its expiry', () => {
     const sent = (await admin.post('/api/v1/people', { email: 'late@gamma.test', name: 'L', role: 'stage-manager' }))
       .body
     expect(new Date(sent.expiresAt).getTime() - new Date(sent.createdAt).getTime()).toBeGreaterThan(6.9 * 86_400_000)
-    const token = later.mailbox.invitationTokenFor('late@gamma.test')
+    const token = await later.mailbox.invitationTokenFor('late@gamma.test')
     offset = 8 * 24 * 60 * 60 * 1000
     const client = new Client(later.url)
     await client.refreshToken()

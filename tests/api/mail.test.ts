@@ -17,7 +17,7 @@ describe('mail through the local SMTP sink', () => {
     const text = `Line one.\nA line long enough to be folded by the mail encoder: ${'x'.repeat(90)} — done.`
     await sender.send({ to: 'reader@example.test', subject: 'A test message', text })
     await sender.close()
-    const received = mailbox.latestTo('reader@example.test')
+    const received = await mailbox.latestTo('reader@example.test')
     expect(received.subject).toBe('A test message')
     expect(received.from).toBe('no-reply@loftledger.invalid')
     expect(received.text).toBe(text)

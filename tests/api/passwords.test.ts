@@ -16,7 +16,7 @@ afterAll(() => app.stop())
 // A new account is made by accepting an invitation; its password is chosen there.
 async function newAccount(password: string, email = 'new.rigger@alpha.test') {
   await admin.post('/api/v1/people', { email, name: 'New Rigger', role: 'fly-operator' }).expect(201)
-  const token = app.mailbox.invitationTokenFor(email)
+  const token = await app.mailbox.invitationTokenFor(email)
   const visitor = new Client(app.url)
   await visitor.refreshToken()
   return visitor.post('/api/v1/invitations/accept', { token, password })

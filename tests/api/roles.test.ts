@@ -211,6 +211,8 @@ const ROUTES: RouteCase[] = [
     expected: adminOnly(409),
   },
   { method: 'delete', path: () => '/api/v1/people/00000000-0000-4000-8000-000000000000', expected: adminOnly(404) },
+  { method: 'get', path: () => '/api/v1/outbox', expected: adminOnly(200) },
+  { method: 'get', path: () => '/api/v1/outbox/00000000-0000-4000-8000-000000000000', expected: adminOnly(404) },
   { method: 'post', path: () => '/api/v1/calculations', body: () => calculation, expected: all(200) },
 ]
 

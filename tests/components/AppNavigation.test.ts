@@ -51,6 +51,7 @@ describe('AppNavigation', () => {
       'nav-item-library',
       'nav-productions',
       'nav-people',
+      'nav-outbox',
       'nav-venue-settings',
     ])
   })

@@ -24,7 +24,7 @@ describe('the administrator brings a new crew member in', () => {
 
     // The link from the e-mail, opened in a browser where nobody is signed in.
     await suite.context.clearCookies()
-    const token = suite.app.mailbox.invitationTokenFor('new.hand@demo.test')
+    const token = await suite.app.mailbox.invitationTokenFor('new.hand@demo.test')
     const newcomer = await suite.context.newPage()
     await newcomer.goto(`${suite.app.url}/invitation/${token}`)
     await expect

@@ -12,7 +12,7 @@ export async function inviteAndAccept(
 ) {
   const invited = await admin.post('/api/v1/people', person)
   if (invited.status !== 201) throw new Error(`invitation failed: ${invited.status} ${JSON.stringify(invited.body)}`)
-  const token = app.mailbox.invitationTokenFor(person.email)
+  const token = await app.mailbox.invitationTokenFor(person.email)
   const member = new Client(app.url)
   await member.refreshToken()
   const accepted = await member.post('/api/v1/invitations/accept', { token, ...answer })

@@ -4,6 +4,12 @@ import { startMailSink, type MailSink, type ReceivedMail } from '../../scripts/l
 export class Mailbox {
   readonly messages: ReceivedMail[] = []
   private sink: MailSink | null = null
+  /**
+   * Resolves once every delivery the app has started is done (sent, or failed and recorded), so what the
+   * sink holds is final; a test app sets it to its outbox's `idle`. Mail is delivered after commit, not
+   * before the answer.
+   */
+  settle: () => Promise<void> = async () => {}
 
   static async open() {
     const mailbox = new Mailbox()
@@ -15,17 +21,27 @@ export class Mailbox {
     return this.sink!.url
   }
 
-  /** The latest message to `address`. */
-  latestTo(address: string): ReceivedMail {
-    const found = this.messages.filter((mail) => mail.to.includes(address.toLowerCase())).at(-1)
+  get port() {
+    return this.sink!.port
+  }
+
+  /** Every message to `address` so far, once deliveries under way are done. */
+  async allTo(address: string): Promise<ReceivedMail[]> {
+    await this.settle()
+    return this.messages.filter((mail) => mail.to.includes(address.toLowerCase()))
+  }
+
+  /** The latest message to `address`, once deliveries under way are done. */
+  async latestTo(address: string): Promise<ReceivedMail> {
+    const found = (await this.allTo(address)).at(-1)
     if (!found)
       throw new Error(`no mail to ${address}; mail so far went to ${this.messages.map((m) => m.to).join(', ')}`)
     return found
   }
 
   /** The invitation token in the latest message to `address`. */
-  invitationTokenFor(address: string): string {
-    const match = /\/invitation\/([A-Za-z0-9_-]+)/.exec(this.latestTo(address).text)
+  async invitationTokenFor(address: string): Promise<string> {
+    const match = /\/invitation\/([A-Za-z0-9_-]+)/.exec((await this.latestTo(address)).text)
     if (!match) throw new Error(`no invitation link in the mail to ${address}`)
     return match[1]!
   }

@@ -36,6 +36,7 @@ export async function startTestApp(
     ...options.env,
   })
   const running = await startServer(config, options.overrides)
+  mailbox.settle = () => running.handle.context.outbox.idle()
   const stop = async () => {
     await running.stop()
     await mailbox.close()

@@ -3,6 +3,7 @@ import venueBoundTicketsRetiredBricksInvitations from './0002-venue-bound-ticket
 import itemLibraryProductions from './0003-item-library-productions.js'
 import hangRevisions from './0004-hang-revisions.js'
 import arborContentsBrickStock from './0005-arbor-contents-brick-stock.js'
+import mailOutbox from './0006-mail-outbox.js'
 
 export interface Migration {
   name: string
@@ -18,4 +19,5 @@ export const migrations: Migration[] = [
   itemLibraryProductions,
   hangRevisions,
   arborContentsBrickStock,
+  mailOutbox,
 ]

@@ -3,6 +3,7 @@ import type { Invitation } from '../../../shared/schemas/invitation.js'
 import type { PersonInput } from '../../../shared/schemas/person.js'
 import { inTransaction, type ServiceContext } from '../../context.js'
 import { AppError, notFound } from '../../http/errors.js'
+import { queueMail, requireMailServer } from '../outbox/outbox.service.js'
 import { invitationMail } from './invitation-mail.js'
 import type { InvitationModel } from './invitation.model.js'
 import { INVITATION_LIFETIME_DAYS, newInvitationToken } from './invitation-token.js'
@@ -35,9 +36,11 @@ async function refuseMemberHere(ctx: ServiceContext, email: string) {
 /**
  * Invites a person to a role here: a pending invitation (replacing any earlier one to the same address) and
  * an e-mail with a single-use link. The answer is the same whether or not the address has an account.
- * The mail is sent last inside the transaction, so an invitation nobody was told about is never kept.
+ * The e-mail is queued in the outbox in the same transaction, so the invitation and its message are kept
+ * together or not at all, and it is delivered after commit (retried while the mail server is down).
  */
 export function invite(ctx: ServiceContext, body: PersonInput): Promise<Invitation> {
+  requireMailServer(ctx)
   return inTransaction(ctx, async (tx) => {
     const { db, actor, transaction } = tx
     await refuseMemberHere(tx, body.email)
@@ -60,16 +63,15 @@ export function invite(ctx: ServiceContext, body: PersonInput): Promise<Invitati
       { transaction },
     )
     const venue = await db.models.Venue.findByPk(actor.venueId, { attributes: ['name'], transaction })
-    await tx.mail.send(
-      invitationMail({
-        to: body.email,
-        name: body.name,
-        role: body.role,
-        venueName: venue?.name ?? 'a venue',
-        invitedBy: actor.name,
-        link: `${tx.publicUrl}/invitation/${token}`,
-      }),
-    )
+    const mail = invitationMail({
+      to: body.email,
+      name: body.name,
+      role: body.role,
+      venueName: venue?.name ?? 'a venue',
+      invitedBy: actor.name,
+      link: `${tx.publicUrl}/invitation/${token}`,
+    })
+    await queueMail(tx, { ...mail, to: [body.email], cause: { kind: 'invitation', id: row.id } })
     return invitationToApi(row)
   })
 }

@@ -36,7 +36,7 @@ function lineLabel(line: number, fromAt: number | null, toAt: number | null, uni
 
 /**
  * The rows of the load comparison: total load, each line's load, then the counterweight (bricks needed and
- * loaded, the arbor side, the balance in words, each brick type's count), the haul force and the motor's load.
+ * loaded, the arbor side, the balance in words, each brick type either plan uses, by count), the haul force and the motor's load.
  *
  * @example
  * comparisonRows(comparison)[0] // { key: 'total', label: 'Total load', from: '388.8 lb', to: '416.8 lb', change: '+28 lb' }
@@ -59,7 +59,8 @@ export function comparisonRows(comparison: HangComparison): ComparisonRow[] {
       from: balance(counterweight.outOfBalance.from),
       to: balance(counterweight.outOfBalance.to),
     })
-    for (const brick of counterweight.bricks)
+    // A brick type neither plan uses says nothing.
+    for (const brick of counterweight.bricks.filter((type) => type.from || type.to))
       rows.push({
         key: `brick-${brick.name}`,
         label: `${brick.name}, count`,

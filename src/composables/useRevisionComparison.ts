@@ -4,16 +4,17 @@ import type { HangRevision, HangSummary } from '../../shared/schemas/index.js'
 import type { UnitSystem } from '../../shared/units/index.js'
 import { hangsApi } from '../api/hangs'
 import { itemTypesApi } from '../api/item-types'
+import { chooseRevisions } from './revisionChoice'
 import { useAsyncTask } from './useAsyncTask'
 
 /**
  * A lineset's saved revisions and the comparison of two of them: `load` reads the list (and the library's names,
- * so a change of item type reads by name), and whichever two `chosen` names are read once each and compared in
- * the venue's units.
+ * so a change of item type reads by name); the two the page's query names (`left`, `right`; by default the
+ * latest and the one before it) are read once each and compared in the venue's units.
  */
 export function useRevisionComparison(
   linesetId: () => string,
-  chosen: () => { left: number | null; right: number | null },
+  query: () => { left?: unknown; right?: unknown },
   units: () => UnitSystem,
 ) {
   const summaries = ref<HangSummary[]>([])
@@ -22,6 +23,13 @@ export function useRevisionComparison(
   const itemTypeNames = shallowRef<ReadonlyMap<string, string>>(new Map())
   const listing = useAsyncTask()
   const reading = useAsyncTask()
+  const choice = computed(() =>
+    chooseRevisions(
+      summaries.value.map((summary) => summary.revision),
+      query(),
+    ),
+  )
+  const chosen = () => choice.value
 
   async function load() {
     const list = await listing.run(() => hangsApi.list(linesetId()))
@@ -57,5 +65,5 @@ export function useRevisionComparison(
     left.value && right.value ? compareRevisions(left.value, right.value, units(), itemTypeNames.value) : null,
   )
 
-  return { summaries, loaded, listing, reading, left, right, comparison, load }
+  return { summaries, loaded, listing, reading, choice, left, right, comparison, load }
 }

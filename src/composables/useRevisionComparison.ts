@@ -32,6 +32,9 @@ export function useRevisionComparison(
   const chosen = () => choice.value
 
   async function load() {
+    // Revisions are kept by number, which only means something within one lineset.
+    revisions.value = new Map()
+    loaded.value = false
     const list = await listing.run(() => hangsApi.list(linesetId()))
     if (!list) return
     summaries.value = list

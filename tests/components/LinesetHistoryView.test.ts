@@ -140,10 +140,11 @@ describe('LinesetHistoryView', () => {
     expect(changeIn(w, 'total')).toBe('−20.06 lb')
   })
 
-  it('when a lineset has a single revision, then there is nothing to compare and the page says so', async () => {
+  it('when a lineset has a single revision, then there is nothing to compare, the page says so and offers no picks', async () => {
     vi.mocked(hangsApi.list).mockResolvedValue([summary(1)])
     const { w } = await openHistory()
     expect(w.get('[data-testid="history-one-revision"]').text()).toContain('nothing to compare')
     expect(w.find('[data-testid="history-comparison"]').exists()).toBe(false)
+    expect(w.find('[data-testid^="history-pick-"]').exists()).toBe(false)
   })
 })

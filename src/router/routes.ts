@@ -48,6 +48,14 @@ export const routes: RouteRecordRaw[] = [
     meta: { roles: everyone, title: 'Lineset' },
   },
   {
+    // `?left=&right=` name the two revisions compared; the hang editor links here after a stale save.
+    path: '/linesets/:id/history',
+    name: 'lineset-history',
+    component: () => import('../views/LinesetHistoryView.vue'),
+    props: true,
+    meta: { roles: everyone, title: 'Lineset history' },
+  },
+  {
     path: '/bricks',
     name: 'brick-types-list',
     component: () => import('../views/BrickTypesListView.vue'),

@@ -1,9 +1,16 @@
-import type { Lineset, LinesetEventsPage, LinesetInput, LinesetUpdate } from '../../shared/schemas/index.js'
+import type {
+  Lineset,
+  LinesetDetail,
+  LinesetEventsPage,
+  LinesetInput,
+  LinesetListItem,
+  LinesetUpdate,
+} from '../../shared/schemas/index.js'
 import { api } from './client'
 
 export const linesetsApi = {
-  list: () => api.get<Lineset[]>('/linesets').then((r) => r.data),
-  read: (id: string) => api.get<Lineset>(`/linesets/${encodeURIComponent(id)}`).then((r) => r.data),
+  list: () => api.get<LinesetListItem[]>('/linesets').then((r) => r.data),
+  read: (id: string) => api.get<LinesetDetail>(`/linesets/${encodeURIComponent(id)}`).then((r) => r.data),
   create: (body: LinesetInput) => api.post<Lineset>('/linesets', body).then((r) => r.data),
   update: (id: string, body: LinesetUpdate) =>
     api.put<Lineset>(`/linesets/${encodeURIComponent(id)}`, body).then((r) => r.data),

@@ -115,6 +115,21 @@ describe('counting an arbor at the rail', () => {
     expect((await director.get(arborOf(id))).body.bricks[0].count).toBe(2)
   })
 
+  it('when ten counts based on the same version race, then exactly one is recorded and the rest answer 409', async () => {
+    const id = await freshLineset()
+    const before = await stockOf(alpha.brickTypeId)
+    const answers = await Promise.all(
+      Array.from({ length: 10 }, (_, i) =>
+        director.put(arborOf(id), { version: 0, bricks: [{ brickTypeId: alpha.brickTypeId, count: i + 1 }] }),
+      ),
+    )
+    const recorded = answers.filter((res) => res.status === 200)
+    expect(recorded).toHaveLength(1)
+    expect(answers.filter((res) => res.status === 409 && res.body.error.code === 'stale_version')).toHaveLength(9)
+    const count = recorded[0]!.body.bricks[0].count as number
+    expect((await stockOf(alpha.brickTypeId)).onArbors).toBe(before.onArbors + count)
+  })
+
   it('when storage holds fewer bricks than the count needs, then it answers 409 naming the type and how many are missing, and moves nothing', async () => {
     const id = await freshLineset()
     const { inStorage } = await stockOf(alpha.brickTypeId)

@@ -2,6 +2,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
 import { flushPromises, type VueWrapper } from '@vue/test-utils'
 import { createPinia, setActivePinia } from 'pinia'
 import type { BrickType, Role } from '../../shared/schemas/index.js'
+import { brickStockApi } from '../../src/api/brick-stock'
 import { brickTypesApi } from '../../src/api/brick-types'
 import { ApiError } from '../../src/api/errors'
 import BrickTypesListView from '../../src/views/BrickTypesListView.vue'
@@ -13,6 +14,8 @@ import { personWith, venue } from './fixtures'
 vi.mock('../../src/api/brick-types', () => ({
   brickTypesApi: { list: vi.fn(), create: vi.fn(), update: vi.fn(), remove: vi.fn() },
 }))
+
+vi.mock('../../src/api/brick-stock', () => ({ brickStockApi: { list: vi.fn() } }))
 
 const steel: BrickType = {
   id: 'a1',
@@ -26,7 +29,24 @@ const steel: BrickType = {
 }
 
 let wrapper: VueWrapper | undefined
-beforeEach(() => vi.mocked(brickTypesApi.list).mockResolvedValue([steel]))
+beforeEach(() => {
+  vi.mocked(brickTypesApi.list).mockResolvedValue([steel])
+  vi.mocked(brickStockApi.list).mockResolvedValue([
+    {
+      brickTypeId: 'a1',
+      name: 'Full steel',
+      owned: 1400,
+      onArbors: 300,
+      reserved: 20,
+      inStorage: 1080,
+      retired: false,
+      byLineset: [
+        { linesetId: '2c6a8d10-0000-4000-8000-000000000005', number: 5, name: 'First electric', count: 36 },
+        { linesetId: '2c6a8d10-0000-4000-8000-000000000010', number: 10, name: 'Second electric', count: 264 },
+      ],
+    },
+  ])
+})
 afterEach(() => {
   wrapper?.unmount()
   vi.clearAllMocks()
@@ -84,5 +104,13 @@ describe('BrickTypesListView', () => {
     await flushPromises()
     expect(w.get('[data-testid="brick-types-stale"]').text()).toContain('Someone else changed that brick type')
     expect(vi.mocked(brickTypesApi.list).mock.calls.length).toBe(readsBefore + 1)
+  })
+
+  it('when anyone opens the bricks, then the stock shows owned, on arbors, reserved and in storage, and which arbors hold them', async () => {
+    const w = await openBricks('stage-manager')
+    const cells = w.findAll('[data-testid="brick-stock-table"] tbody td').map((cell) => cell.text())
+    expect(cells.slice(0, 5)).toEqual(['Full steel', '1,400', '300', '20', '1,080'])
+    expect(w.get('[data-testid="brick-stock-place-5"]').text()).toBe('5 · First electric: 36')
+    expect(w.get('[data-testid="brick-stock-place-10"]').text()).toBe('10 · Second electric: 264')
   })
 })

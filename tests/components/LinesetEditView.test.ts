@@ -9,7 +9,7 @@ import { testRouter } from './router'
 import { useSessionStore } from '../../src/stores/session'
 import { useVenueStore } from '../../src/stores/venue'
 import { mountWithApp } from './mount'
-import { lineset, personWith, venue } from './fixtures'
+import { linesetDetail as lineset, personWith, venue } from './fixtures'
 
 vi.mock('../../src/api/linesets', () => ({
   linesetsApi: { list: vi.fn(), read: vi.fn(), create: vi.fn(), update: vi.fn(), remove: vi.fn() },
@@ -17,6 +17,16 @@ vi.mock('../../src/api/linesets', () => ({
 // The page's balance panel reads the venue's bricks; none are needed for these tests.
 vi.mock('../../src/api/brick-types', () => ({
   brickTypesApi: { list: vi.fn(async () => []), create: vi.fn(), update: vi.fn(), remove: vi.fn() },
+}))
+
+// The page's arbor panel reads what the arbor holds; empty here.
+vi.mock('../../src/api/arbors', () => ({
+  arborsApi: {
+    read: vi.fn(async () => ({ linesetId: 'x', bricks: [], version: 0 })),
+    count: vi.fn(),
+    lockOut: vi.fn(),
+    release: vi.fn(),
+  },
 }))
 
 let wrapper: VueWrapper | undefined

@@ -30,6 +30,7 @@ describe('LinesetsListTable', () => {
       'Border lights',
       'Hemp, several lines',
       'Due for inspection',
+      '—',
       '3',
       '40 m',
       '6.5 m',
@@ -75,5 +76,19 @@ describe('useLinesetFilters', () => {
     expect(filters.shown.value).toEqual([])
     filters.reset()
     expect(filters.shown.value).toHaveLength(2)
+  })
+
+  it('when a lineset comes with its operating status, then the row says it in words with an icon, not colour alone', () => {
+    const locked = { ...drape, operatingStatus: 'locked-out' as const, lockout: null }
+    const loading = { ...hemp, operatingStatus: 'loading' as const, lockout: null }
+    wrapper = mountWithApp(LinesetsListTable, {
+      props: { items: [locked, loading], unitSystem: 'imperial', emptyText: 'None' },
+    })
+    const chip = wrapper.get('[data-testid="linesets-row-12"] [data-testid="operating-locked-out"]')
+    expect(chip.text()).toBe('Locked out')
+    expect(chip.find('.mdi-lock-outline').exists()).toBe(true)
+    expect(wrapper.get('[data-testid="linesets-row-3"] [data-testid="operating-loading"]').text()).toBe(
+      'Loading, do not operate',
+    )
   })
 })

@@ -1,4 +1,4 @@
-import type { Lineset, SessionUser, Venue } from '../../shared/schemas/index.js'
+import type { Lineset, LinesetDetail, SessionUser, Venue } from '../../shared/schemas/index.js'
 import type { Role } from '../../shared/schemas/index.js'
 
 /** Made-up records for the component tests; the figures are plausible, not from any real house. */
@@ -48,5 +48,13 @@ export const lineset = (overrides: Partial<Lineset> = {}): Lineset => ({
   hoistSpeed: null,
   notes: '',
   unitSystem: 'imperial',
+  ...overrides,
+})
+
+/** The sample lineset as `GET /linesets/:id` answers it: ready, not locked out. */
+export const linesetDetail = (overrides: Partial<LinesetDetail> = {}): LinesetDetail => ({
+  ...lineset(),
+  operatingStatus: 'ready',
+  lockout: null,
   ...overrides,
 })

@@ -1,0 +1,90 @@
+import { computed, toValue, type MaybeRefOrGetter } from 'vue'
+import { positionsBeyondBatten } from '../../shared/hang/entry-bounds.js'
+import {
+  expandHangEntries,
+  loadCount,
+  type EngineItem,
+  type HangEntry,
+  type LibraryWeights,
+} from '../../shared/hang/hang-items.js'
+import { fieldsFromIssues } from '../../shared/errors/fields.js'
+import { MAX_ITEMS } from '../../shared/schemas/calculation.js'
+import { hangEntrySchemaFor } from '../../shared/schemas/index.js'
+import type { UnitSystem } from '../../shared/units/index.js'
+import { entryDraftFrom } from './hangRowEntries'
+import { isBlankRow, type HangRow } from './hangRows'
+
+/** Messages for one row: by the entry's field (`at`, `fabric.height`, `points.1`, ...) or for the row (`row`). */
+export type RowMessages = Record<string, string>
+
+interface Sources {
+  rows: MaybeRefOrGetter<readonly HangRow[]>
+  units: MaybeRefOrGetter<UnitSystem>
+  battenLength: MaybeRefOrGetter<number>
+  library: MaybeRefOrGetter<ReadonlyMap<string, LibraryWeights>>
+}
+
+/**
+ * The typed rows read as the save body's entries by the shared schema, checked against the batten, and expanded
+ * with the library into the engine's loads by `expandHangEntries`: the same code the server runs on a save, so
+ * the live figures are the ones the saved revision will hold. Blank rows are left out.
+ */
+export function useHangEntries(sources: Sources) {
+  const counted = computed(() => toValue(sources.rows).filter((row) => !isBlankRow(row)))
+  const parsed = computed(() => {
+    const schema = hangEntrySchemaFor(toValue(sources.units))
+    return counted.value.map((row) => ({ row, outcome: schema.safeParse(entryDraftFrom(row)) }))
+  })
+  /** The entries to save, or null while any row does not read. */
+  const entries = computed<HangEntry[] | null>(() =>
+    parsed.value.every(({ outcome }) => outcome.success)
+      ? parsed.value.map(({ outcome }) => outcome.data as HangEntry)
+      : null,
+  )
+  const expansion = computed(() =>
+    entries.value
+      ? expandHangEntries(entries.value, toValue(sources.library), toValue(sources.units), MAX_ITEMS)
+      : null,
+  )
+
+  const messages = computed(() => {
+    const byRow: Record<number, RowMessages> = {}
+    const put = (row: HangRow | undefined, field: string, message: string) => {
+      if (row) (byRow[row.id] ??= {})[field] ??= message
+    }
+    // Each row that reads is checked against the batten on its own, so a stretch past the end shows while
+    // another row still holds a typo.
+    const readable: Array<{ row: HangRow; entry: HangEntry }> = []
+    for (const { row, outcome } of parsed.value) {
+      if (outcome.success) readable.push({ row, entry: outcome.data as HangEntry })
+      else for (const [path, message] of Object.entries(fieldsFromIssues(outcome.error.issues))) put(row, path, message)
+    }
+    const bounds = positionsBeyondBatten(
+      readable.map(({ entry }) => entry),
+      toValue(sources.battenLength),
+    )
+    for (const { index, field, message } of bounds) put(readable[index]?.row, field, message)
+    if (expansion.value && !expansion.value.ok)
+      for (const { index, field, message } of expansion.value.problems) put(counted.value[index], field, message)
+    return byRow
+  })
+
+  /** What stops the list as a whole (too many loads), not any one row. */
+  const listProblems = computed(() =>
+    expansion.value && !expansion.value.ok
+      ? expansion.value.problems.filter((problem) => problem.index < 0).map((problem) => problem.message)
+      : [],
+  )
+
+  /** The engine's loads, or null while any row is wrong. */
+  const items = computed<EngineItem[] | null>(() =>
+    expansion.value?.ok && Object.keys(messages.value).length === 0 ? expansion.value.items : null,
+  )
+
+  /** Which counted row each engine load came from, so an engine message lands on its row. */
+  const owners = computed(() =>
+    (entries.value ?? []).flatMap((entry, index) => Array<number>(loadCount(entry)).fill(counted.value[index]!.id)),
+  )
+
+  return { counted, entries, items, messages, listProblems, owners }
+}

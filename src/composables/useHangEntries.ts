@@ -31,9 +31,26 @@ interface Sources {
  */
 export function useHangEntries(sources: Sources) {
   const counted = computed(() => toValue(sources.rows).filter((row) => !isBlankRow(row)))
+  // A keystroke changes one row; the others keep what the schema said of them (a figure's checks are not free, and
+  // 250 rows are read on every keystroke). Keyed by the draft as text, so any change to a row reads it again.
+  type Outcome = ReturnType<ReturnType<typeof hangEntrySchemaFor>['safeParse']>
+  const readBefore = new Map<number, { key: string; outcome: Outcome }>()
   const parsed = computed(() => {
-    const schema = hangEntrySchemaFor(toValue(sources.units))
-    return counted.value.map((row) => ({ row, outcome: schema.safeParse(entryDraftFrom(row)) }))
+    const units = toValue(sources.units)
+    const schema = hangEntrySchemaFor(units)
+    const seen = new Set<number>()
+    const read = counted.value.map((row) => {
+      seen.add(row.id)
+      const draft = entryDraftFrom(row)
+      const key = `${units} ${JSON.stringify(draft, (_, value) => (Number.isNaN(value) ? 'NaN' : value))}`
+      const before = readBefore.get(row.id)
+      if (before?.key === key) return { row, outcome: before.outcome }
+      const outcome = schema.safeParse(draft)
+      readBefore.set(row.id, { key, outcome })
+      return { row, outcome }
+    })
+    for (const id of readBefore.keys()) if (!seen.has(id)) readBefore.delete(id)
+    return read
   })
   /** The entries to save, or null while any row does not read. */
   const entries = computed<HangEntry[] | null>(() =>

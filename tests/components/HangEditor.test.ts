@@ -6,6 +6,7 @@ import { BALANCE_CAUTIONS, FIGURES_DISCLAIMER } from '../../shared/engine/cautio
 import { expandHangEntries, type HangEntry } from '../../shared/hang/hang-items.js'
 import { linesetCalculationInput } from '../../shared/hang/lineset-calculation.js'
 import { brickTypesApi } from '../../src/api/brick-types'
+import { ApiError } from '../../src/api/errors'
 import { hangsApi } from '../../src/api/hangs'
 import { itemTypesApi } from '../../src/api/item-types'
 import { productionsApi } from '../../src/api/productions'
@@ -108,6 +109,16 @@ describe('HangEditor, opening and typing', () => {
     expect(w.find('[data-testid="hang-items-empty"]').exists()).toBe(true)
     // Simple statics: the bare 108.8 lb batten split equally.
     expect(lineLoads(w)).toEqual(['54.4 lb', '54.4 lb'])
+  })
+
+  it('when the saved hang cannot be read, then the editor says so and the cautions still show', async () => {
+    vi.mocked(hangsApi.list).mockRejectedValue(
+      new ApiError(503, 'database_unavailable', 'The database is not answering'),
+    )
+    const w = await open(TWO_LINES)
+    expect(w.get('[data-testid="hang-read-problem"]').text()).toContain('The database is not answering')
+    expect(w.find('[data-testid="hang-save"]').exists()).toBe(false)
+    expect(w.get('[data-testid="hang-cautions-waiting"]').text()).toContain(FIGURES_DISCLAIMER)
   })
 
   it('when library units are put at a point, then the line loads follow their weight with its allowance', async () => {

@@ -143,6 +143,19 @@ describe('HangEditor, saving', () => {
     expect(w.get('[data-testid="hang-revision"]').text()).toContain('Revision 5')
   })
 
+  it('when the person leaves with the hang unsaved, then the app asks first and stays if told to', async () => {
+    const w = await editRevision3()
+    const router = (w.vm as unknown as { $router: import('vue-router').Router }).$router
+    const confirm = vi.spyOn(window, 'confirm').mockReturnValue(false)
+    await router.push('/bricks')
+    expect(confirm).toHaveBeenCalledWith('Leave without saving this hang?')
+    expect(router.currentRoute.value.path).toBe('/editor-under-test')
+    confirm.mockReturnValue(true)
+    await router.push('/bricks')
+    expect(router.currentRoute.value.path).toBe('/bricks')
+    confirm.mockRestore()
+  })
+
   it('when a stage manager opens the hang, then it reads with no way to change or save it', async () => {
     const w = (wrapper = await openEditor(TWO_LINES, 'stage-manager'))
     expect(field(w, 0, 'label').get('input').element).toHaveProperty('value', 'Colour wash')

@@ -69,6 +69,7 @@ export function useHangEditor(sources: Sources) {
     revision.value = latest
     changed.value = false
     attempted.value = false
+    saver.reset()
   }
 
   async function load() {

@@ -78,5 +78,13 @@ export function useHangSave(linesetId: () => string, newestSummary: () => Promis
     }
   }
 
-  return { saving, rowErrors, fieldErrors, stale, save, forgetRow }
+  /** Another revision opened: nothing said of the earlier one holds. */
+  function reset() {
+    rowErrors.value = {}
+    fieldErrors.value = {}
+    stale.value = null
+    saving.error.value = null
+  }
+
+  return { saving, rowErrors, fieldErrors, stale, save, forgetRow, reset }
 }

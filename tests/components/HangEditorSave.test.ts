@@ -143,6 +143,28 @@ describe('HangEditor, saving', () => {
     expect(w.get('[data-testid="hang-revision"]').text()).toContain('Revision 5')
   })
 
+  it('when someone saved a newer revision meanwhile and the person drops their own, then the latest opens', async () => {
+    vi.mocked(hangsApi.save).mockRejectedValueOnce(
+      new ApiError(409, 'stale_revision', 'Revision 4 was saved since you started', {
+        basedOnRevision: 'The latest is revision 4',
+      }),
+    )
+    const w = await editRevision3()
+    vi.mocked(hangsApi.list).mockResolvedValue([{ ...REVISION_4 }, { ...REVISION_3 }])
+    vi.mocked(hangsApi.read).mockResolvedValue(REVISION_4)
+    await save(w)
+    await w.get('[data-testid="hang-open-latest"]').trigger('click')
+    await flushPromises()
+    await vi.waitFor(() => expect(document.querySelector('[data-testid="hang-discard-dialog-confirm"]')).not.toBeNull())
+    ;(document.querySelector('[data-testid="hang-discard-dialog-confirm"]') as HTMLElement).click()
+    await flushPromises()
+    expect(hangsApi.read).toHaveBeenLastCalledWith(TWO_LINES.id, REVISION_4.id)
+    expect(w.get('[data-testid="hang-revision"]').text()).toBe('Revision 4, saved by Alex Gallery on 5 Mar 2026')
+    expect(w.findAll('[data-testid^="hang-row-"][data-testid$="-label"]')).toHaveLength(2)
+    expect(w.find('[data-testid="hang-stale"]').exists()).toBe(false)
+    expect(w.get('[data-testid="hang-save"]').attributes()).not.toHaveProperty('disabled')
+  })
+
   it('when the person leaves with the hang unsaved, then the app asks first and stays if told to', async () => {
     const w = await editRevision3()
     const router = (w.vm as unknown as { $router: import('vue-router').Router }).$router

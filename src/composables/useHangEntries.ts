@@ -14,6 +14,8 @@ import type { UnitSystem } from '../../shared/units/index.js'
 import { entryDraftFrom } from './hangRowEntries'
 import { isBlankRow, type HangRow } from './hangRows'
 
+const loadWeight = (load: EngineItem) => ('weight' in load ? load.weight : load.weightPerLength * (load.to - load.from))
+
 /** Messages for one row: by the entry's field (`at`, `fabric.height`, `points.1`, ...) or for the row (`row`). */
 export type RowMessages = Record<string, string>
 
@@ -103,5 +105,22 @@ export function useHangEntries(sources: Sources) {
     (entries.value ?? []).flatMap((entry, index) => Array<number>(loadCount(entry)).fill(counted.value[index]!.id)),
   )
 
-  return { counted, entries, items, messages, listProblems, owners }
+  /** What each readable row puts on the batten in all, by row id, so a person can check it against the piece. */
+  const rowWeights = computed(() => {
+    const weights = new Map<number, number>()
+    const library = toValue(sources.library)
+    const units = toValue(sources.units)
+    for (const { row, outcome } of parsed.value) {
+      if (!outcome.success) continue
+      const expanded = expandHangEntries([outcome.data as HangEntry], library, units, MAX_ITEMS)
+      if (expanded.ok)
+        weights.set(
+          row.id,
+          expanded.items.reduce((sum, load) => sum + loadWeight(load), 0),
+        )
+    }
+    return weights
+  })
+
+  return { counted, entries, items, messages, listProblems, owners, rowWeights }
 }

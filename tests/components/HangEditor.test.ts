@@ -130,6 +130,7 @@ describe('HangEditor, opening and typing', () => {
     await type(w, 0, 'at', '20')
     // 4 × (12 + 2) lb = 56 lb at the centre of two symmetric lines: (108.8 + 56) / 2 = 82.4 lb each.
     expect(lineLoads(w)).toEqual(['82.4 lb', '82.4 lb'])
+    expect(field(w, 0, 'weight-in-all').text()).toBe('56 lb in all on the batten')
     expect(w.get('[data-testid="hang-unsaved"]').text()).toBe('Not saved')
   })
 
@@ -161,6 +162,7 @@ describe('HangEditor, opening and typing', () => {
     await type(w, 0, 'to', '40')
     // TRADE.md worked check: 40 ft × 20 ft of 25 oz velour at 100 % fullness weighs about 185.2 lb (fabric only).
     expect(total(w)).toContain('185.19 lb')
+    expect(field(w, 0, 'weight-in-all').text()).toBe('185.19 lb in all on the batten')
     await w.get('[data-testid="hang-row-0-basis-area"]').trigger('click')
     await type(w, 0, 'weightPerArea', '0.1')
     // By area: 0.1 lb/ft² × 20 ft × 2 = 4 lb/ft over 40 ft = 160 lb.

@@ -40,6 +40,9 @@ export default defineConfig({
           include: ['tests/components/**/*.test.ts'],
           setupFiles: ['tests/support/dom.setup.ts'],
           server: { deps: { inline: ['vuetify'] } },
+          // Every wait is for a state; this only bounds how long a whole page (the lineset form and its hang
+          // editor) may take to render in jsdom while the full suite keeps both cores busy.
+          testTimeout: 20000,
         },
       },
       {

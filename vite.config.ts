@@ -39,9 +39,10 @@ export default defineConfig({
           environment: 'jsdom',
           include: ['tests/components/**/*.test.ts'],
           setupFiles: ['tests/support/dom.setup.ts'],
-          // A ceiling for a busy two-core machine (Vuetify mounts in jsdom are slow there), never a speed target.
-          testTimeout: 30000,
           server: { deps: { inline: ['vuetify'] } },
+          // Every wait is for a state; this only bounds how long a whole page (the lineset form and its hang
+          // editor) may take to render in jsdom while the full suite keeps both cores busy.
+          testTimeout: 30000,
         },
       },
       {

@@ -1,6 +1,6 @@
 /**
  * Median and 95th-percentile time per calculation: the engine's reference workloads, then the worst accepted
- * input known, on the server's path (the calculation thread) and on the browser's live panel path (building the
+ * input known, on the server's path (the calculation thread) and on the browser's hang editor path (building the
  * input from a stored lineset and the typed rows, then the same engine). Target: the worst case well under 100 ms.
  */
 import { pathToFileURL } from 'node:url'
@@ -110,40 +110,45 @@ for (const [name, raw] of [
   await pool.close()
 }
 
-// The browser's path: the live panel's composable (Vue's reactivity runs in Node as in the browser), one keystroke
-// in one row recomputing everything the panel shows. Loaded by path: the client is typechecked on its own.
-const live = (await import(pathToFileURL(join(projectRoot, 'src/composables/useLiveBalance.ts')).href)) as {
-  useLiveBalance(sources: { lineset: Ref<unknown>; venue: Ref<unknown>; brickTypes: Ref<unknown> }): {
+// The browser's path: the hang editor's composable (Vue's reactivity runs in Node as in the browser), one keystroke
+// in one row read by the shared schema, expanded as on the server and recomputed with everything the editor shows.
+// Loaded by path: the client is typechecked on its own.
+const live = (await import(pathToFileURL(join(projectRoot, 'src/composables/useHangEditor.ts')).href)) as {
+  useHangEditor(sources: { lineset: Ref<unknown>; venue: Ref<unknown>; brickTypes: Ref<unknown> }): {
     rows: Ref<TypedRow[]>
-    result: Ref<unknown>
+    balance: { result: Ref<unknown>; otherProblems: Ref<unknown> }
     rowMessages: Ref<unknown>
-    otherProblems: Ref<unknown>
   }
 }
 const scene = worstLinesetScene('imperial')
-const balance = live.useLiveBalance({
+const editor = live.useHangEditor({
   lineset: ref(scene.lineset),
   venue: ref(scene.venue),
   brickTypes: ref(scene.brickTypes),
 })
-balance.rows.value = scene.rows
+editor.rows.value = scene.rows
+const balance = {
+  result: editor.balance.result,
+  rowMessages: editor.rowMessages,
+  otherProblems: editor.balance.otherProblems,
+}
 let keystroke = 0
 // A point row's weight: a figure the sum reads, so every keystroke recomputes it.
-const typedRow = balance.rows.value.findIndex((row) => row.kind === 'point')
+const typedRow = editor.rows.value.findIndex((row) => row.kind === 'point')
 const type = (text: (n: number) => string) => () => {
-  balance.rows.value[typedRow]!.weight = text(keystroke++)
+  editor.rows.value[typedRow]!.weight = text(keystroke++)
   const shown = [balance.result.value, balance.rowMessages.value, balance.otherProblems.value]
-  if (!shown[0] && !Object.keys(shown[1] as object).length) throw new Error('the live panel worked nothing out')
+  if (!shown[0] && !Object.keys(shown[1] as object).length) throw new Error('the hang editor worked nothing out')
   return shown
 }
 measure(
-  'live panel, worst lineset and 250 rows, a keystroke',
+  'hang editor, worst lineset and 250 rows, a keystroke',
   type((n) => String(100 + (n % 50))),
   60,
   10,
 )
 measure(
-  'live panel, the same with one row refused',
+  'hang editor, the same with one row refused',
   type((n) => `1${n % 10}x`),
   60,
   10,

@@ -6,16 +6,26 @@ import type { BrickType, Lineset, Venue } from '../../shared/schemas/index.js'
 import type { UnitSystem } from '../../shared/units/index.js'
 import { worstCalculation } from './worst-calculations.js'
 
-/** One typed row, as the live panel keeps it: text, so a half-typed figure stays on screen. */
+/** One typed row, as the hang editor keeps it (src/composables/hangRows.ts): text, so a half-typed figure stays on screen. */
 export interface TypedRow {
   id: number
-  label: string
+  category: 'other'
   kind: 'point' | 'stretch'
+  label: string
+  itemTypeId: string
+  placement: 'point'
+  quantity: string
   weight: string
   at: string
   weightPerLength: string
   from: string
   to: string
+  fabricBasis: 'grade'
+  grade: string
+  weightPerArea: string
+  height: string
+  fullness: string
+  points: string
 }
 
 /**
@@ -69,13 +79,23 @@ export function worstLinesetScene(units: UnitSystem) {
   const rows: TypedRow[] = worst.items.map((item, k) => {
     const row: TypedRow = {
       id: k + 1,
-      label: item.label,
+      category: 'other',
       kind: 'point',
+      label: item.label,
+      itemTypeId: '',
+      placement: 'point',
+      quantity: '',
       weight: '',
       at: '',
       weightPerLength: '',
       from: '',
       to: '',
+      fabricBasis: 'grade',
+      grade: '',
+      weightPerArea: '',
+      height: '',
+      fullness: '',
+      points: '',
     }
     if ('weight' in item) return { ...row, weight: String(item.weight), at: String(item.at) }
     return {

@@ -14,10 +14,14 @@ import { linesetDetail as lineset, personWith, venue } from './fixtures'
 vi.mock('../../src/api/linesets', () => ({
   linesetsApi: { list: vi.fn(), read: vi.fn(), create: vi.fn(), update: vi.fn(), remove: vi.fn() },
 }))
-// The page's balance panel reads the venue's bricks; none are needed for these tests.
+// The page's hang editor reads the venue's bricks, the lineset's hangs, the library and the productions; a lineset
+// with no hang yet and an empty venue are enough for these tests.
 vi.mock('../../src/api/brick-types', () => ({
   brickTypesApi: { list: vi.fn(async () => []), create: vi.fn(), update: vi.fn(), remove: vi.fn() },
 }))
+vi.mock('../../src/api/hangs', () => ({ hangsApi: { list: vi.fn(async () => []), read: vi.fn(), save: vi.fn() } }))
+vi.mock('../../src/api/item-types', () => ({ itemTypesApi: { list: vi.fn(async () => []) } }))
+vi.mock('../../src/api/productions', () => ({ productionsApi: { list: vi.fn(async () => []) } }))
 
 // The page's arbor panel reads what the arbor holds; empty here.
 vi.mock('../../src/api/arbors', () => ({
@@ -60,7 +64,7 @@ describe('LinesetEditView', () => {
     expect(w.find('[data-testid="lineset-read-only"]').exists()).toBe(true)
     for (const testid of ['lineset-save', 'lineset-delete', 'lineset-add-pick-point'])
       expect(w.find(`[data-testid="${testid}"]`).exists(), testid).toBe(false)
-    // Once: beside the balance panel's figures, not repeated below it.
+    // Once: beside the hang editor's figures, not repeated below it.
     expect(w.findAll('[data-testid="app-cautions"]')).toHaveLength(1)
     expect(w.findAll('[data-testid="app-caution"]').length).toBeGreaterThan(5)
     expect(w.get('[data-testid="app-figures-disclaimer"]').text()).toContain('assist a qualified person')

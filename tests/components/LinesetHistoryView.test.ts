@@ -6,7 +6,7 @@ import { linesetsApi } from '../../src/api/linesets'
 import { useSessionStore } from '../../src/stores/session'
 import { useVenueStore } from '../../src/stores/venue'
 import LinesetHistoryView from '../../src/views/LinesetHistoryView.vue'
-import { lineset, personWith, venue } from './fixtures'
+import { lineset, linesetDetail, personWith, venue } from './fixtures'
 import { addedEvent, hangId, hangRevision, revisionResult, savedEvent, summary } from './historyFixtures'
 import { mountWithApp } from './mount'
 import { testRouter } from './router'
@@ -22,7 +22,7 @@ beforeEach(() => {
   // Only the clock is fixed (the page says "3 hours ago"); promises and timers run as usual.
   vi.useFakeTimers({ toFake: ['Date'] })
   vi.setSystemTime(new Date('2025-03-03T21:00:00.000Z'))
-  vi.mocked(linesetsApi.read).mockResolvedValue(lineset())
+  vi.mocked(linesetsApi.read).mockResolvedValue(linesetDetail())
   vi.mocked(linesetsApi.events).mockImplementation(async (_id, page = {}) =>
     page.before === '4'
       ? { events: [savedEvent(3, 1), addedEvent], next: null }

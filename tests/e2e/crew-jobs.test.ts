@@ -52,13 +52,16 @@ describe('the crew at work', () => {
     await page.close()
   })
 
-  it('when the fly operator tries a hang, then the panel shows the brick plan the shared engine computes, beside the cautions', async () => {
+  it('when the fly operator changes a hang, then the editor shows the brick plan the shared engine computes, beside the cautions', async () => {
     const page = await signIn('fly@demo.test')
     await page.locator('[data-testid=linesets-row-1]').click()
-    await page.locator('[data-testid=balance-add-item]').click()
-    await page.locator('[data-testid=balance-row-0-label] input').fill('Show drop')
-    await page.locator('[data-testid=balance-row-0-weight] input').fill('200')
-    await page.locator('[data-testid=balance-row-0-at] input').fill('24')
+    // The saved valance opens in the editor; it comes off and a drop goes on in its place.
+    await page.locator('[data-testid=hang-row-0-remove]').click()
+    await page.locator('[data-testid=hang-items-empty]').waitFor()
+    await page.locator('[data-testid=hang-add-hardware]').click()
+    await page.locator('[data-testid=hang-row-0-label] input').fill('Show drop')
+    await page.locator('[data-testid=hang-row-0-weight] input').fill('200')
+    await page.locator('[data-testid=hang-row-0-at] input').fill('24')
 
     // What the same shared code gives for the demo lineset 1 with that item.
     const demo = DEMO_LINESETS[0]!
@@ -102,8 +105,8 @@ describe('the crew at work', () => {
     await expect.poll(() => page.locator('[data-testid=balance-cautions]').innerText()).toMatch(/qualified person/)
     expect(await page.locator('[data-testid=lineset-save]').count()).toBe(0)
     await page
-      .locator('[data-testid=balance-panel]')
-      .screenshot({ path: join(artifacts, 'fly-operator-try-a-hang.png') })
+      .locator('[data-testid=hang-editor]')
+      .screenshot({ path: join(artifacts, 'fly-operator-change-a-hang.png') })
     await page.close()
   })
 })

@@ -26,6 +26,7 @@ import { peopleRoutes } from './modules/people/people.routes.js'
 import { productionRoutes } from './modules/productions/production.routes.js'
 import { createPassport } from './modules/session/passport.js'
 import { sessionRoutes } from './modules/session/session.routes.js'
+import { ticketRoutes } from './modules/tickets/ticket.routes.js'
 import { venueRoutes } from './modules/venues/venue.routes.js'
 
 export interface AppHandle {
@@ -82,6 +83,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/people', peopleRoutes(context)],
     ['/invitations', invitationRoutes(context, csrf)],
     ['/outbox', outboxRoutes(context)],
+    ['/tickets', ticketRoutes(context)],
     ['/calculations', calculationRoutes(calculations)],
   ] as const
   for (const [path, router] of mounts) api.use(path, router)

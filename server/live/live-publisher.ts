@@ -10,6 +10,12 @@ export interface LiveEvent {
     | 'arbor-counted'
     | 'lineset-locked-out'
     | 'lineset-released'
+    | 'ticket-opened'
+    | 'ticket-approved'
+    | 'ticket-declined'
+    | 'ticket-withdrawn'
+    | 'ticket-loading'
+    | 'ticket-loaded'
   venueId: string
   linesetId: string
 }

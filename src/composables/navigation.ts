@@ -17,6 +17,13 @@ const ENTRIES: readonly NavigationEntry[] = [
     testid: 'nav-linesets',
     roles: ROLES,
   },
+  {
+    title: 'Change tickets',
+    icon: 'mdi-clipboard-check-outline',
+    routeName: 'tickets-list',
+    testid: 'nav-tickets',
+    roles: ROLES,
+  },
   { title: 'Bricks', icon: 'mdi-cube-outline', routeName: 'brick-types-list', testid: 'nav-bricks', roles: ROLES },
   {
     title: 'Item library',

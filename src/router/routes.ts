@@ -74,6 +74,20 @@ export const routes: RouteRecordRaw[] = [
     meta: { roles: OUTBOX_READERS, title: 'Outgoing mail' },
   },
   {
+    path: '/tickets',
+    name: 'tickets-list',
+    component: () => import('../views/TicketsListView.vue'),
+    meta: { roles: everyone, title: 'Change tickets' },
+  },
+  {
+    // The link in every ticket e-mail.
+    path: '/tickets/:id',
+    name: 'ticket-detail',
+    component: () => import('../views/TicketDetailView.vue'),
+    props: true,
+    meta: { roles: everyone, title: 'Change ticket' },
+  },
+  {
     path: '/venue',
     name: 'venue-settings',
     component: () => import('../views/VenueSettingsView.vue'),

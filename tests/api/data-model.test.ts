@@ -115,6 +115,8 @@ describe('tickets stay within their venue', () => {
       venueId,
       linesetId,
       hangId,
+      // A closed ticket: the lineset already has an open one, and a lineset holds one open ticket at a time.
+      state: 'withdrawn',
       requestedBy: null,
       decidedBy: null,
       decidedAt: null,

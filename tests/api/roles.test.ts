@@ -55,6 +55,9 @@ const calculation = {
   tolerance: 10,
 }
 
+// No ticket has this id: a role let through reaches the service and hears 404.
+const NO_TICKET = '00000000-0000-4000-8000-000000000000'
+
 const ROUTES: RouteCase[] = [
   { method: 'get', path: () => '/api/v1/venue', expected: all(200) },
   {
@@ -213,6 +216,44 @@ const ROUTES: RouteCase[] = [
   { method: 'delete', path: () => '/api/v1/people/00000000-0000-4000-8000-000000000000', expected: adminOnly(404) },
   { method: 'get', path: () => '/api/v1/outbox', expected: adminOnly(200) },
   { method: 'get', path: () => '/api/v1/outbox/00000000-0000-4000-8000-000000000000', expected: adminOnly(404) },
+  { method: 'get', path: () => '/api/v1/tickets', expected: all(200) },
+  { method: 'get', path: () => `/api/v1/tickets/${NO_TICKET}`, expected: all(404) },
+  {
+    method: 'post',
+    path: () => '/api/v1/tickets',
+    body: () => ({ hangId: NO_TICKET }),
+    expected: hangEditors(404),
+  },
+  {
+    method: 'post',
+    path: () => `/api/v1/tickets/${NO_TICKET}/approve`,
+    body: () => ({ version: 0 }),
+    expected: editors(404),
+  },
+  {
+    method: 'post',
+    path: () => `/api/v1/tickets/${NO_TICKET}/decline`,
+    body: () => ({ version: 0, comment: 'Roles' }),
+    expected: editors(404),
+  },
+  {
+    method: 'post',
+    path: () => `/api/v1/tickets/${NO_TICKET}/withdraw`,
+    body: () => ({ version: 0 }),
+    expected: hangEditors(404),
+  },
+  {
+    method: 'post',
+    path: () => `/api/v1/tickets/${NO_TICKET}/start-loading`,
+    body: () => ({ version: 0 }),
+    expected: hangEditors(404),
+  },
+  {
+    method: 'post',
+    path: () => `/api/v1/tickets/${NO_TICKET}/complete`,
+    body: () => ({ version: 0, loaded: [], feltBalance: 'balanced' }),
+    expected: hangEditors(404),
+  },
   { method: 'post', path: () => '/api/v1/calculations', body: () => calculation, expected: all(200) },
 ]
 

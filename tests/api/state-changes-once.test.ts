@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { sampleLineset } from '../support/fixtures.js'
 import { inviteAndAccept } from '../support/invitations.js'
+import { saveRevision } from '../support/tickets.js'
 import { venueSuite } from '../support/venue-suite.js'
 
 const suite = venueSuite('administrator')
@@ -70,5 +71,17 @@ describe('every state change takes effect once under races', () => {
     ).body
     const answers = await times(10, () => suite.client.delete(`/api/v1/invitations/${sent.id}`))
     expect(statuses(answers)).toEqual([204, ...Array<number>(9).fill(404)])
+  })
+
+  it('when a change ticket is withdrawn by 10 requests at once, then one answers 200, the rest 409 naming the state, and the ledger records one withdrawal', async () => {
+    const linesetId = suite.venue.linesetId
+    const hang = await saveRevision(suite.client, linesetId, null, 200)
+    const ticket = (await suite.client.post('/api/v1/tickets', { hangId: hang.id }).expect(201)).body
+    const answers = await times(10, () => suite.client.post(`/api/v1/tickets/${ticket.id}/withdraw`, { version: 0 }))
+    expect(statuses(answers)).toEqual([200, ...Array<number>(9).fill(409)])
+    const withdrawals = await suite.app.handle.db.models.LinesetEvent.count({
+      where: { linesetId, eventType: 'ticket-withdrawn' },
+    })
+    expect(withdrawals).toBe(1)
   })
 })

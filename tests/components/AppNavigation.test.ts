@@ -28,6 +28,7 @@ describe('AppNavigation', () => {
   it('when a stage manager is signed in, then only the pages every role reads are offered', async () => {
     expect(await navigationFor('stage-manager')).toEqual([
       'nav-linesets',
+      'nav-tickets',
       'nav-bricks',
       'nav-item-library',
       'nav-productions',
@@ -37,6 +38,7 @@ describe('AppNavigation', () => {
   it('when a technical director is signed in, then venue settings are offered but people are not', async () => {
     expect(await navigationFor('technical-director')).toEqual([
       'nav-linesets',
+      'nav-tickets',
       'nav-bricks',
       'nav-item-library',
       'nav-productions',
@@ -47,6 +49,7 @@ describe('AppNavigation', () => {
   it('when an administrator is signed in, then every page is offered', async () => {
     expect(await navigationFor('administrator')).toEqual([
       'nav-linesets',
+      'nav-tickets',
       'nav-bricks',
       'nav-item-library',
       'nav-productions',

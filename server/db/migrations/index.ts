@@ -4,6 +4,7 @@ import itemLibraryProductions from './0003-item-library-productions.js'
 import hangRevisions from './0004-hang-revisions.js'
 import arborContentsBrickStock from './0005-arbor-contents-brick-stock.js'
 import mailOutbox from './0006-mail-outbox.js'
+import ticketPlansDecisions from './0007-ticket-plans-decisions.js'
 
 export interface Migration {
   name: string
@@ -20,4 +21,5 @@ export const migrations: Migration[] = [
   hangRevisions,
   arborContentsBrickStock,
   mailOutbox,
+  ticketPlansDecisions,
 ]

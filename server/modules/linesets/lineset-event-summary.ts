@@ -2,6 +2,7 @@ import { displayQuantity } from '../../../shared/units/display.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 import type { StoredLineset } from './lineset.mapper.js'
 import { summarizeStockEvent } from './stock-event-summary.js'
+import { summarizeTicketEvent } from './ticket-event-summary.js'
 
 // Plain words for each field, as a person on the crew would say them.
 const FIELD_WORDS: Record<keyof StoredLineset, string> = {
@@ -54,7 +55,7 @@ function savedHangWords(hang: SavedHang | undefined, system: UnitSystem): string
 /** What a ledger entry says happened, in one plain sentence; `payload` with its figures in `system`. */
 export function summarizeLinesetEvent(type: string, payload: Record<string, unknown>, system: UnitSystem): string {
   const lineset = payload.lineset as Partial<StoredLineset> | undefined
-  const stock = summarizeStockEvent(type, payload)
+  const stock = summarizeStockEvent(type, payload) ?? summarizeTicketEvent(type, payload)
   if (stock) return stock
   switch (type) {
     case 'lineset-added':

@@ -96,6 +96,15 @@ describe('a weight change from asking to loaded', () => {
       expect(now.onArbors - was.onArbors).toBe(change.count)
       expect(now.owned).toBe(now.onArbors + now.reserved + now.inStorage)
     }
+    // The stock page shows the same: this arbor's count of each brick type it now holds.
+    await loader.goto(`${suite.app.url}/bricks`)
+    const chips = loader.locator(`[data-testid=brick-stock-place-${set.number}]`)
+    await chips.first().waitFor()
+    const shown = (await chips.allInnerTexts()).join(' | ')
+    for (const after of ticket.arborAfter as { count: number }[])
+      if (after.count > 0)
+        expect(shown).toMatch(new RegExp(`${set.number} · [^|]*: ${after.count.toLocaleString('en-US')}`))
+    await shot(loader, 'fly-operator-stock-after-loading')
     await loader.goto(`${suite.app.url}/tickets`)
     await loader.locator(`[data-testid=ticket-row-${ticketId}]`).waitFor()
     await shot(loader, 'fly-operator-tickets-list')

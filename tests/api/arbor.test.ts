@@ -178,3 +178,28 @@ describe('counting an arbor at the rail', () => {
       expect((await client.put(arborOf(id), { version: 0, bricks: [] })).status).toBe(403)
   })
 })
+
+describe('a lineset whose arbor holds bricks', () => {
+  it('when it is retired or made a hemp set with bricks aboard, then 409 says to unload first; once counted empty, both go', async () => {
+    const administrator = await signedIn(app.url, alpha.emails.administrator)
+    const number = nextNumber++
+    const id = (await director.post('/api/v1/linesets', sampleLineset(number)).expect(201)).body.id as string
+    await director.put(arborOf(id), { version: 0, bricks: [{ brickTypeId: alpha.brickTypeId, count: 4 }] }).expect(200)
+    const before = await databaseFingerprint(app.handle.db.sequelize)
+
+    const retire = await administrator.delete(`/api/v1/linesets/${id}`)
+    expect(retire.status).toBe(409)
+    expect(retire.body.error.code).toBe('arbor_not_empty')
+    expect(retire.body.error.message).toMatch(/4 bricks on its arbor/)
+    const { version } = (await director.get(`/api/v1/linesets/${id}`).expect(200)).body
+    const asHemp = { ...sampleLineset(number, { kind: 'hemp-multi', arborEmptyWeight: null, arborCapacity: null }) }
+    const rekind = await director.put(`/api/v1/linesets/${id}`, { ...asHemp, version })
+    expect(rekind.status).toBe(409)
+    expect(rekind.body.error.code).toBe('arbor_not_empty')
+    expect(await databaseFingerprint(app.handle.db.sequelize)).toBe(before)
+
+    await director.put(arborOf(id), { version: 1, bricks: [] }).expect(200)
+    await director.put(`/api/v1/linesets/${id}`, { ...asHemp, version }).expect(200)
+    expect((await administrator.delete(`/api/v1/linesets/${id}`)).status).toBe(204)
+  })
+})

@@ -14,6 +14,7 @@ import { venueUnitSystem } from '../venues/venue.service.js'
 import { recordLinesetChange } from './lineset-history.js'
 import { operatingStates } from './operating-states.js'
 import { changedFields, linesetFromApi, linesetToApi, storedFromRow } from './lineset.mapper.js'
+import { refuseWhileHolding } from './lineset-holdings.js'
 
 const active = (venueId: string) => ({ venueId, retiredAt: null })
 
@@ -88,6 +89,7 @@ export function updateLineset(ctx: ServiceContext, id: string, body: LinesetUpda
     const system = await unitsTypedIn(tx, body.unitSystem)
     const before = await findOwn(tx, id)
     await refuseTakenNumber(tx, body.number, id)
+    if (before.kind !== body.kind) await refuseWhileHolding(tx, id, body.kind)
     const { version, unitSystem: _typedIn, ...fields } = body
     const [count, rows] = await tx.db.models.Lineset.update(
       { ...linesetFromApi(fields, system), version: version + 1 },
@@ -113,6 +115,7 @@ export function updateLineset(ctx: ServiceContext, id: string, body: LinesetUpda
  */
 export function retireLineset(ctx: ServiceContext, id: string): Promise<void> {
   return inTransaction(ctx, async (tx) => {
+    await refuseWhileHolding(tx, id)
     const [count] = await tx.db.models.Lineset.update(
       { retiredAt: tx.clock.now(), version: tx.db.sequelize.literal('version + 1') },
       { where: { id, ...active(tx.actor.venueId) }, transaction: tx.transaction },

@@ -10,8 +10,7 @@ import { artifacts, demoInBrowser, signInOnPage } from '../support/demo-in-brows
 const suite = demoInBrowser()
 
 async function signIn(email: string): Promise<Page> {
-  await suite.context.clearCookies() // one browser profile, a fresh session per person
-  const page = await suite.context.newPage()
+  const page = await suite.newPage()
   await signInOnPage(page, suite.app.url, email)
   await page.locator('[data-testid=linesets-row-1]').waitFor()
   return page

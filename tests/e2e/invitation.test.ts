@@ -6,8 +6,7 @@ const suite = demoInBrowser()
 
 describe('the administrator brings a new crew member in', () => {
   it('when the administrator invites someone, then the e-mailed link lets them choose a password by the rule and land signed in to the venue', async () => {
-    await suite.context.clearCookies()
-    const admin = await suite.context.newPage()
+    const admin = await suite.newPage()
     await signInOnPage(admin, suite.app.url, 'admin@demo.test')
     await admin.locator('[data-testid=linesets-row-1]').waitFor()
     await admin.goto(`${suite.app.url}/people`)
@@ -23,9 +22,8 @@ describe('the administrator brings a new crew member in', () => {
     await admin.close()
 
     // The link from the e-mail, opened in a browser where nobody is signed in.
-    await suite.context.clearCookies()
     const token = await suite.app.mailbox.invitationTokenFor('new.hand@demo.test')
-    const newcomer = await suite.context.newPage()
+    const newcomer = await suite.newPage()
     await newcomer.goto(`${suite.app.url}/invitation/${token}`)
     await expect
       .poll(() => newcomer.locator('[data-testid=invitation-summary]').innerText())

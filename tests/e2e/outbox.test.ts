@@ -37,9 +37,8 @@ async function messagesThatDidNotGo() {
 
 describe('the administrator reads the outgoing mail', () => {
   it('when an invitation has gone out, then the outbox page shows it sent, with its recipient and its text on opening', async () => {
-    await suite.context.clearCookies()
     await messagesThatDidNotGo()
-    const admin = await suite.context.newPage()
+    const admin = await suite.newPage()
     await signInOnPage(admin, suite.app.url, 'admin@demo.test')
     await admin.locator('[data-testid=linesets-row-1]').waitFor()
     await admin.goto(`${suite.app.url}/people`)

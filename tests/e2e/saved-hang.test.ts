@@ -39,8 +39,7 @@ async function saveAndWait(page: Page, revision: number) {
 
 describe('a saved hang, from the library to the history', () => {
   it('when the fly operator builds an electric from the library and saves it, then the history shows the revisions and what changed', async () => {
-    await suite.context.clearCookies()
-    const page = await suite.context.newPage()
+    const page = await suite.newPage()
     await signInOnPage(page, suite.app.url, 'fly@demo.test')
     await page.locator(`[data-testid=linesets-row-${FOURTH_ELECTRIC}]`).click()
     await page.locator('[data-testid=hang-items-empty]').waitFor()

@@ -9,8 +9,7 @@ import { signedIn } from '../support/test-app.js'
 const suite = demoInBrowser()
 
 async function pageFor(email: string, path = '/'): Promise<Page> {
-  await suite.context.clearCookies() // one browser profile, a fresh session per person
-  const page = await suite.context.newPage()
+  const page = await suite.newPage()
   await page.setViewportSize({ width: 1280, height: 900 })
   await signInOnPage(page, `${suite.app.url}${path}`, email)
   return page
@@ -61,7 +60,7 @@ describe('a weight change from asking to loaded', () => {
     expect((await suite.app.mailbox.latestTo('fly@demo.test')).text).toContain(link)
     await director.close()
 
-    // The browser profile is shared: the fly operator signs in again for the loading.
+    // The fly operator opens the e-mailed link in a fresh browser for the loading.
     await operator.close()
     const loader = await pageFor('fly@demo.test', link)
     await loader.locator('[data-testid=ticket-start-loading]').click()

@@ -16,7 +16,12 @@ export const artifacts = join(projectRoot, 'tests', 'artifacts')
  * demo venue, and Debian's Chromium. Read `app` and `context` inside tests (they exist after beforeAll).
  */
 export function demoInBrowser() {
-  const suite = {} as { app: TestApp; context: BrowserContext }
+  const suite = {} as {
+    app: TestApp
+    context: BrowserContext
+    /** A page in a browser context of its own: a person signed in there shares nothing with anyone else. */
+    newPage(): Promise<Page>
+  }
   let chromium: Awaited<ReturnType<typeof launchChromium>> | undefined
   beforeAll(async () => {
     const clientDir = join(projectRoot, 'dist')
@@ -25,6 +30,8 @@ export function demoInBrowser() {
     await seedDemoIfEmpty(suite.app.handle.context)
     chromium = await launchChromium()
     suite.context = chromium.context
+    const launched = chromium
+    suite.newPage = async () => (await launched.newContext()).newPage()
     mkdirSync(artifacts, { recursive: true })
   })
   afterAll(async () => {

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { seedVenue, type VenueFixture } from '../support/fixtures.js'
 import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import { databaseFingerprint } from '../support/database-fingerprint.js'
 import { hungLineset, operatingStatusOf, saveRevision, stockLine } from '../support/tickets.js'
 
 // The fixture's "Full" brick weighs 20 lb and the house owns 100; a 200 lb drop on the sample set plans five
@@ -224,6 +225,20 @@ describe('withdrawing', () => {
     const after = await stockLine(director, alpha.brickTypeId)
     expect(after.reserved).toBe(held.reserved - 5)
     expect(after.inStorage).toBe(held.inStorage + 5)
+  })
+})
+
+describe('a lineset with a ticket still open', () => {
+  it('when it is retired with a ticket open, then 409 open_ticket writes nothing; once withdrawn, it retires', async () => {
+    const { linesetId, ticket } = await openedTicket()
+    const before = await databaseFingerprint(app.handle.db.sequelize)
+    const refused = await admin.delete(`/api/v1/linesets/${linesetId}`)
+    expect(refused.status).toBe(409)
+    expect(refused.body.error.code).toBe('open_ticket')
+    expect(refused.body.error.message).toMatch(/change ticket still open/)
+    expect(await databaseFingerprint(app.handle.db.sequelize)).toBe(before)
+    await act(operator, ticket.id, 'withdraw', { version: 0 }).expect(200)
+    expect((await admin.delete(`/api/v1/linesets/${linesetId}`)).status).toBe(204)
   })
 })
 

@@ -1,5 +1,6 @@
 import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
+import { searchFewestInBand, type ScaledBrick } from './brick-plan-fewest.js'
 
 /** A venue's brick type and how many are free to load. */
 export interface BrickStock {
@@ -31,12 +32,7 @@ export interface BrickPlan {
  */
 export const BRICK_PLAN_WORK_LIMIT = 100_000
 
-interface Scaled {
-  weight: number
-  thickness: number
-  available: number
-  index: number
-}
+type Scaled = ScaledBrick
 
 /**
  * The heaviest load of bricks not above `limit` (so the set stays balanced or batten heavy), with the
@@ -44,11 +40,22 @@ interface Scaled {
  * thicknesses are scaled to whole numbers at their common decimal precision and searched by
  * branch and bound, heaviest type first.
  *
+ * With `within` (a weight band below the limit, e.g. the venue's tolerance times the purchase ratio), the
+ * plan is instead the one with the fewest bricks that lands inside the band, the heaviest among equal counts:
+ * a crew handles every brick twice, and twenty trim bricks to close the last few pounds of a band the venue
+ * already accepts cost time at the rail and stock in storage. When no plan reaches the band, the heaviest
+ * plan is given as without it.
+ *
  * @example
  * planBricks([{ name: 'full', weight: 20, thickness: 2, available: 80 }, { name: 'half', weight: 10, thickness: 1, available: 10 }], 250, 60)
  *   .counts // [12, 1]
  */
-export function planBricks(stock: readonly BrickStock[], limit: Decimal.Value, stackRoom: Decimal.Value): BrickPlan {
+export function planBricks(
+  stock: readonly BrickStock[],
+  limit: Decimal.Value,
+  stackRoom: Decimal.Value,
+  within?: Decimal.Value,
+): BrickPlan {
   const weightScale = Dec(10).pow(Math.max(0, ...stock.map((b) => Dec(b.weight).decimalPlaces())))
   const thicknessScale = Dec(10).pow(Math.max(0, ...stock.map((b) => Dec(b.thickness).decimalPlaces())))
   const types: Scaled[] = stock
@@ -62,17 +69,33 @@ export function planBricks(stock: readonly BrickStock[], limit: Decimal.Value, s
     .sort((a, b) => b.weight - a.weight || a.thickness - b.thickness)
   const divisor = types.reduce((g, t) => greatestCommonDivisor(g, t.weight), 0) || 1
   const rawLimit = Dec.max(0, Dec(limit).times(weightScale).floor()).toNumber()
-  const best = search(
-    types,
-    rawLimit - (rawLimit % divisor),
-    Dec.max(0, Dec(stackRoom).times(thicknessScale).floor()).toNumber(),
-  )
+  const scaledLimit = rawLimit - (rawLimit % divisor)
+  const scaledStack = Dec.max(0, Dec(stackRoom).times(thicknessScale).floor()).toNumber()
+  const best = bandOrHeaviest(types, scaledLimit, scaledStack, limit, within, weightScale)
   const counts = stock.map(() => 0)
   best.counts.forEach((count, k) => (counts[types[k]!.index] = count))
   const loaded = stock.reduce((sum, b, i) => sum.plus(Dec(b.weight).times(counts[i]!)), Dec(0))
   const stackUsed = stock.reduce((sum, b, i) => sum.plus(Dec(b.thickness).times(counts[i]!)), Dec(0))
   const bricks = counts.reduce((a, b) => a + b, 0)
   return { counts, loaded, stackUsed, bricks, complete: best.complete, work: best.work }
+}
+
+/** The fewest bricks inside the band when one is asked for and reachable, else the heaviest plan. */
+function bandOrHeaviest(
+  types: Scaled[],
+  scaledLimit: number,
+  scaledStack: number,
+  limit: Decimal.Value,
+  within: Decimal.Value | undefined,
+  weightScale: Decimal,
+) {
+  if (within === undefined) return search(types, scaledLimit, scaledStack)
+  const floor = Dec.max(0, Dec(limit).minus(within).times(weightScale).ceil()).toNumber()
+  // Half the budget for the band, so that a band out of reach still leaves the heaviest search room to work.
+  const fewest = searchFewestInBand(types, floor, scaledLimit, scaledStack, BRICK_PLAN_WORK_LIMIT / 2)
+  if (fewest.counts) return { counts: fewest.counts, complete: fewest.complete, work: fewest.work }
+  const heaviest = search(types, scaledLimit, scaledStack, BRICK_PLAN_WORK_LIMIT - fewest.work)
+  return { ...heaviest, work: heaviest.work + fewest.work }
 }
 
 /**
@@ -85,7 +108,7 @@ function greatestCommonDivisor(a: number, b: number): number {
   return a
 }
 
-function search(types: Scaled[], limit: number, stackRoom: number) {
+function search(types: Scaled[], limit: number, stackRoom: number, budget = BRICK_PLAN_WORK_LIMIT) {
   const n = types.length
   const restWeight: number[] = new Array(n + 1).fill(0)
   const restDensity: number[] = new Array(n + 1).fill(0)
@@ -117,7 +140,7 @@ function search(types: Scaled[], limit: number, stackRoom: number) {
     const least = i === n - 1 ? most : 0
     for (let c = most; c >= least; c--) {
       // Each count tried is one partial plan: stop the moment the budget is spent, not at the loop's end.
-      if (work >= BRICK_PLAN_WORK_LIMIT) {
+      if (work >= budget) {
         stopped = true
         break
       }

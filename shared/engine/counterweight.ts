@@ -47,7 +47,8 @@ export function balanceCounterweight(request: CounterweightRequest): Counterweig
   const required = battenSide.times(ratio).minus(fixed)
   const room = Dec(arbor.capacity).minus(aboard)
   const stackRoom = Dec(arbor.stackLength).minus(arbor.stackUsed ?? 0)
-  const plan = planBricks(request.bricks, Dec.min(required, room), stackRoom)
+  // The band is the tolerance at the batten, which the purchase ratio multiplies at the arbor.
+  const plan = planBricks(request.bricks, Dec.min(required, room), stackRoom, Dec(request.tolerance).times(ratio))
   const arborSide = fixed.plus(plan.loaded)
   const outOfBalance = battenSide.times(ratio).minus(arborSide).div(ratio)
   const checks: Check[] = []

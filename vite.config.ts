@@ -27,8 +27,10 @@ export default defineConfig({
           name: 'api',
           environment: 'node',
           include: ['tests/api/**/*.test.ts'],
-          testTimeout: 20000,
-          hookTimeout: 30000,
+          // A ceiling, not a wait: the heaviest API tests (50 racing completions, the fuzz of every field,
+          // a child process opening a venue) took over 20 s on a two-core machine under other load.
+          testTimeout: 60000,
+          hookTimeout: 60000,
         },
       },
       {

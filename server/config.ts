@@ -22,6 +22,8 @@ const configSchema = z.object({
   SECURE_COOKIES: z.enum(['true', 'false']).optional(),
   /** Failed sign-ins allowed per address per minute before 429. */
   SIGN_IN_ATTEMPTS_PER_MINUTE: z.coerce.number().int().min(1).default(10),
+  /** Seconds an account's streak waits after its five free failed sign-ins, doubling after each further one. */
+  SIGN_IN_FIRST_WAIT_SECONDS: z.coerce.number().int().min(1).max(900).default(1),
   /** The built client to serve; absent in API-only tests. */
   CLIENT_DIR: z.string().optional(),
   /**
@@ -57,6 +59,7 @@ export type Config = Readonly<{
   trustProxy: number
   secureCookies: boolean
   signInAttemptsPerMinute: number
+  signInFirstWaitSeconds: number
   clientDir?: string
   smtpUrl?: string
   mailFrom: string
@@ -87,6 +90,7 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
     trustProxy: value.TRUST_PROXY,
     secureCookies: value.SECURE_COOKIES ? value.SECURE_COOKIES === 'true' : value.NODE_ENV === 'production',
     signInAttemptsPerMinute: value.SIGN_IN_ATTEMPTS_PER_MINUTE,
+    signInFirstWaitSeconds: value.SIGN_IN_FIRST_WAIT_SECONDS,
     clientDir: value.CLIENT_DIR,
     smtpUrl: value.SMTP_URL,
     mailFrom: value.MAIL_FROM,

@@ -3,7 +3,7 @@ import { pruneRateLimitHits } from './rate-limit-store.js'
 
 /** Sign-in attempts a streak may make at once; each further attempt must wait. */
 export const FREE_ATTEMPTS = 5
-/** The wait after the last free attempt, doubled after every further one ... */
+/** The wait after the last free attempt (unless configured), doubled after every further one ... */
 export const FIRST_WAIT_SECONDS = 1
 /** ... up to this (so a stranger can make at most about 100 guesses a day at one account). */
 export const LONGEST_WAIT_SECONDS = 15 * 60
@@ -18,15 +18,16 @@ export const FORGET_AFTER_SECONDS = 24 * 60 * 60
  * waitAfter(5) // 1
  * waitAfter(7) // 4
  */
-export function waitAfter(attempts: number): number {
+export function waitAfter(attempts: number, firstWait = FIRST_WAIT_SECONDS): number {
   if (attempts < FREE_ATTEMPTS) return 0
-  return Math.min(LONGEST_WAIT_SECONDS, FIRST_WAIT_SECONDS * 2 ** Math.min(attempts - FREE_ATTEMPTS, 20))
+  return Math.min(LONGEST_WAIT_SECONDS, firstWait * 2 ** Math.min(attempts - FREE_ATTEMPTS, 20))
 }
 
 // The same waits in SQL, for the attempt count `n`; the exponent is capped so power() cannot overflow.
-const waitSql = (n: string) =>
+// `firstWait` is a validated integer from the configuration, never request data.
+const waitSql = (n: string, firstWait: number) =>
   `LEAST(${LONGEST_WAIT_SECONDS}, CASE WHEN ${n} < ${FREE_ATTEMPTS} THEN 0
-     ELSE ${FIRST_WAIT_SECONDS} * power(2, LEAST(${n} - ${FREE_ATTEMPTS}, 20)) END)`
+     ELSE ${Math.trunc(firstWait)} * power(2, LEAST(${n} - ${FREE_ATTEMPTS}, 20)) END)`
 
 const NEXT_ATTEMPTS = `CASE WHEN rate_limit_hits.reset_at + make_interval(secs => ${FORGET_AFTER_SECONDS}) <= now()
   THEN 1 ELSE rate_limit_hits.hits + 1 END`
@@ -40,7 +41,10 @@ export type Claim = { allowed: true } | { allowed: false; retryAfterSeconds: num
  * the streak allows get through, and a refused one costs no password check and does not lengthen the wait.
  */
 export class SignInStreaks {
-  constructor(private readonly sequelize: Sequelize) {}
+  constructor(
+    private readonly sequelize: Sequelize,
+    private readonly firstWait = FIRST_WAIT_SECONDS,
+  ) {}
 
   private key(name: string) {
     return `sign-in-streak:${name}`
@@ -51,10 +55,10 @@ export class SignInStreaks {
     await pruneRateLimitHits(this.sequelize)
     const key = this.key(name)
     const claimed = await this.sequelize.query<{ hits: number }>(
-      `INSERT INTO rate_limit_hits (key, hits, reset_at) VALUES (:key, 1, now() + make_interval(secs => ${waitSql('1')}))
+      `INSERT INTO rate_limit_hits (key, hits, reset_at) VALUES (:key, 1, now() + make_interval(secs => ${waitSql('1', this.firstWait)}))
        ON CONFLICT (key) DO UPDATE SET
          hits = ${NEXT_ATTEMPTS},
-         reset_at = now() + make_interval(secs => ${waitSql(NEXT_ATTEMPTS)})
+         reset_at = now() + make_interval(secs => ${waitSql(NEXT_ATTEMPTS, this.firstWait)})
        WHERE rate_limit_hits.reset_at <= now()
        RETURNING hits`,
       { replacements: { key }, type: QueryTypes.SELECT },

@@ -231,6 +231,8 @@ describe('withdrawing', () => {
 describe('a lineset with a ticket still open', () => {
   it('when it is retired with a ticket open, then 409 open_ticket writes nothing; once withdrawn, it retires', async () => {
     const { linesetId, ticket } = await openedTicket()
+    // The opening mails every technical director after commit: let that settle before taking the fingerprint.
+    await app.handle.context.outbox.idle()
     const before = await databaseFingerprint(app.handle.db.sequelize)
     const refused = await admin.delete(`/api/v1/linesets/${linesetId}`)
     expect(refused.status).toBe(409)

@@ -24,7 +24,7 @@ export function signInSteps(
   csrf: CsrfProtection,
 ): RequestHandler[] {
   const devices = trustedDevices(config)
-  const streaks = new SignInStreaks(db.sequelize)
+  const streaks = new SignInStreaks(db.sequelize, config.signInFirstWaitSeconds)
   // Rows are keyed by a digest of the e-mail address: the table never holds what people typed.
   const accountNames = new SignedTokens(config.sessionSecret, 'sign-in streak')
 

@@ -73,3 +73,34 @@ describe('tension-only lift lines (check values from issue 13)', () => {
     expect(run(TWO_SPANS).moment).toEqual({ max: 2364, at: 10 })
   })
 })
+
+describe('a batten that would tip (issue 13, §2)', () => {
+  it('when the centre of load lies beyond the end lines, then batten-tips is a danger and no counterweight plan is given', () => {
+    // Lines at 0 and 10 ft under a 40 ft batten of 2.72 lb/ft: its own weight centres at 20 ft.
+    const input = { ...SAMPLE_INPUT, batten: { length: 40, weightPerLength: 2.72, pickPoints: [0, 10] }, items: [] }
+    const result = run(input)
+    expect(result.tensionOnly).toMatchObject({ slackLines: [0], stable: false })
+    expect(loadsOf(result.tensionOnly!.lineLoads)).toEqual([0, 108.8])
+    const tips = result.checks.find((c) => c.code === 'batten-tips')!
+    expect(tips.level).toBe('danger')
+    expect(tips.message).toBe(
+      'The batten cannot hang level: the centre of its load, at 20 ft, lies beyond the end line at 10 ft, so it tips. ' +
+        'No brick plan is offered; move the load between the lines or add a line',
+    )
+    expect(result.counterweight).toBeUndefined()
+    expect(result.checks.map((c) => c.code)).not.toContain('brick-plan')
+  })
+
+  it('when only one line would hold once the pushing lines go slack, then the batten tips about it', () => {
+    // A weightless 20 ft batten on lines at 0, 10 and 20 ft with its one load of 100 lb hanging at the last line.
+    const result = run({
+      ...SAMPLE_INPUT,
+      batten: { length: 20, weightPerLength: 0, pickPoints: [0, 10, 20] },
+      items: [{ weight: 100, at: 20 }],
+    })
+    expect(result.tensionOnly).toMatchObject({ slackLines: [0, 1], stable: false })
+    expect(result.checks.find((c) => c.code === 'batten-tips')!.message).toMatch(
+      /^The batten cannot hang level: once the lines that would push go slack, fewer than two lines hold it \(the centre of its load is at 20 ft\), so it tips/,
+    )
+  })
+})

@@ -53,11 +53,16 @@ export function solveTensionOnly(loads: BattenLoads, rigid: readonly Decimal[]):
     return { beam, full }
   }
   const feasible = (loadsNow: Decimal[], held: number[]) => held.every((k) => !loadsNow[k]!.lt(loadNoise.neg()))
-  // Warm start from the lines that pull in the rigid solution; else the two end lines, which balance any load
-  // whose centre lies between them.
+  // Warm start: release the lines that push, again on the beam that is left, until none does (each pass drops a
+  // line, so at most n passes); else the two end lines, which balance any load whose centre lies between them.
   let held = rigid.flatMap((load, k) => (load.gt(0) ? [k] : []))
   let current = held.length >= 2 ? solve(held) : undefined
-  if (!current || !feasible(current.full, held)) {
+  while (current && !feasible(current.full, held)) {
+    const pulling = held.filter((k) => current!.full[k]!.gt(0))
+    held = pulling
+    current = pulling.length >= 2 ? solve(pulling) : undefined
+  }
+  if (!current) {
     held = [0, n - 1]
     current = solve(held)
     if (!feasible(current.full, held)) return tipped(n, total, current.full, solves)

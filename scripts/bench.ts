@@ -85,10 +85,27 @@ async function measureAsync(name: string, run: () => Promise<unknown>, rounds: n
   report(name, times)
 }
 
+/** The same items crowded into the first 12 ft, so the line at 20 ft would push and goes slack. */
+function slackBatten() {
+  const input = batten(60, 7, 200)
+  const crowd = (x: number) => round2((x * 12) / 60)
+  const items = input.items.map((item) =>
+    item.at !== undefined
+      ? { ...item, at: crowd(item.at) }
+      : { ...item, from: crowd(item.from ?? 0), to: Math.max(crowd(item.to ?? 60), crowd(item.from ?? 0) + 0.5) },
+  )
+  const crowded = calculationInputSchema.parse({ ...input, items })
+  const tension = calculate(crowded).tensionOnly
+  if (!tension?.stable || tension.slackLines.length === 0) throw new Error('the slack case has no slack line')
+  return crowded
+}
+
 const small = batten(40, 5, 20)
 const large = batten(60, 7, 200)
+const slack = slackBatten()
 measure('40 ft batten, 5 lines, 20 items', () => calculate(small))
 measure('60 ft batten, 7 lines, 200 items', () => calculate(large))
+measure('60 ft batten, 7 lines, 200 items, a line slack (target < 2 ms)', () => calculate(slack))
 measure('brick plan, 4 types, 3,000 lb requirement', () => planBricks(bricks, 3000, 400))
 
 console.log('\nThe worst accepted inputs known (scripts/lib/worst-calculations.ts):')

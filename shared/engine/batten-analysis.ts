@@ -7,6 +7,7 @@ import { peakMoment, type PeakMoment } from './bending-moment.js'
 import { battenDeflections } from './deflection.js'
 import { resolvePipe, type PipeProperties } from './pipe-properties.js'
 import { bendingStress, deflectionConverter } from './structural-units.js'
+import { solveTensionOnly } from './tension-only.js'
 
 /**
  * Allowable bending stress 0.66·Fy: the allowable-stress-design value for compact sections, common
@@ -20,7 +21,14 @@ export interface BattenAnalysis {
   hardwareWeight: Decimal
   itemsWeight: Decimal
   totalLoad: Decimal
+  /** Loads with every line rigid (a line may come out pushing: negative). */
   lineLoads: Decimal[]
+  /**
+   * Present when a rigid line load is zero or below: the loads with lines that can only pull, the slack lines'
+   * indices, and whether the batten still hangs level. The peak, stress and deflections below are then this
+   * solution's whenever it is stable.
+   */
+  tensionOnly?: { lineLoads: Decimal[]; slackLines: number[]; stable: boolean }
   peak: PeakMoment
   /** One line only: moment of all loads about it (zero when the load hangs at the point). */
   unbalancedMoment: Decimal
@@ -47,18 +55,24 @@ export function analyseBatten(input: CalculationInput): BattenAnalysis {
     batten.weightPerLength === undefined ? (pipe?.weightPerLength ?? Dec(0)) : Dec(batten.weightPerLength)
   const loads = collectLoads(input, selfWeightPerLength)
   // The model converts and totals the items in the same pass that places them.
-  const model = buildBattenModel(loads.beam)
-  const solution = solveContinuousBeam(model)
+  const rigidModel = buildBattenModel(loads.beam)
+  const rigid = solveContinuousBeam(rigidModel)
   const { battenWeight, hardwareWeight } = loads
+  const totalLoad = battenWeight.plus(hardwareWeight).plus(rigidModel.itemsWeight)
+  const slack = rigid.reactions.length >= 2 && totalLoad.gt(0) && rigid.reactions.some((load) => load.lte(0))
+  const tension = slack ? solveTensionOnly(loads.beam, rigid.reactions) : undefined
+  // The batten's bending follows the lines that actually hold; a tipping batten has no such state, so keep the rigid one.
+  const { model, solution } = tension?.held ?? { model: rigidModel, solution: rigid }
   const analysis: BattenAnalysis = {
     battenWeight,
     hardwareWeight,
-    itemsWeight: model.itemsWeight,
-    totalLoad: battenWeight.plus(hardwareWeight).plus(model.itemsWeight),
-    lineLoads: solution.reactions,
+    itemsWeight: rigidModel.itemsWeight,
+    totalLoad,
+    lineLoads: rigid.reactions,
     peak: peakMoment(model, solution),
-    unbalancedMoment: solution.unbalancedMoment,
+    unbalancedMoment: rigid.unbalancedMoment,
   }
+  if (tension) analysis.tensionOnly = { lineLoads: tension.loads, slackLines: tension.slack, stable: tension.stable }
   if (!pipe) return analysis
   analysis.pipe = pipe
   analysis.bending = {

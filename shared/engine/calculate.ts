@@ -1,4 +1,4 @@
-import { roundTo, unitLabel } from '../units/index.js'
+import { Dec, roundTo, unitLabel } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
 import { validationErrorBody, type ErrorBody } from '../errors/fields.js'
 import { calculationInputSchema, type CalculationInput, type CalculationResult } from '../schemas/calculation.js'
@@ -8,6 +8,7 @@ import { lineChecks, ratedLoadChecks, workingLoadLimit } from './capacity-checks
 import { sortChecks, type Check } from './checks.js'
 import { FIGURES_DISCLAIMER } from './cautions.js'
 import { kindFigures } from './kind-figures.js'
+import { slackChecks } from './slack-checks.js'
 
 const r = (value: Decimal.Value) => roundTo(value, 2)
 
@@ -21,8 +22,14 @@ const r = (value: Decimal.Value) => roundTo(value, 2)
 export function calculate(input: CalculationInput): CalculationResult {
   const { units, batten } = input
   const analysis = analyseBatten(input)
+  const { tensionOnly } = analysis
+  const limit =
+    input.liftLine?.breakingStrength === undefined
+      ? undefined
+      : workingLoadLimit(input.liftLine.breakingStrength, input.liftLine.designFactor)
   const checks: Check[] = [
-    ...lineChecks(analysis.lineLoads, batten.pickPoints, units, input.liftLine),
+    ...slackChecks(analysis, batten.pickPoints, units, limit),
+    ...lineChecks(analysis.lineLoads, batten.pickPoints, units, input.liftLine, tensionOnly),
     ...ratedLoadChecks(analysis.totalLoad, input.ratedLoad, units),
     ...battenChecks(analysis, input.kind, batten.pickPoints, units),
   ]
@@ -45,8 +52,13 @@ export function calculate(input: CalculationInput): CalculationResult {
     moment: { max: r(analysis.peak.value), at: r(analysis.peak.at) },
     checks,
   }
-  if (input.liftLine?.breakingStrength !== undefined)
-    result.lineWorkingLoadLimit = r(workingLoadLimit(input.liftLine.breakingStrength, input.liftLine.designFactor))
+  if (tensionOnly)
+    result.tensionOnly = {
+      lineLoads: tensionOnly.lineLoads.map((load, k) => ({ at: batten.pickPoints[k]!, load: r(load) })),
+      slackLines: tensionOnly.slackLines,
+      stable: tensionOnly.stable,
+    }
+  if (limit) result.lineWorkingLoadLimit = r(limit)
   if (analysis.bending) {
     const { stress, allowable } = analysis.bending
     result.bending = {
@@ -62,7 +74,12 @@ export function calculate(input: CalculationInput): CalculationResult {
       overhangs: analysis.deflection.overhangs.map((o) => ({ end: o.end, length: r(o.length), tip: r(o.tip) })),
     }
   }
-  Object.assign(result, kindFigures(input, analysis, checks))
+  // A block, like a line, must take the larger of the two loads it may see.
+  const heavier = analysis.lineLoads.map((load, k) =>
+    tensionOnly?.stable ? Dec.max(load, tensionOnly.lineLoads[k]!) : load,
+  )
+  const tips = tensionOnly?.stable === false
+  Object.assign(result, kindFigures(input, { totalLoad: analysis.totalLoad, lineLoads: heavier, tips }, checks))
   result.checks = sortChecks(checks)
   return result
 }

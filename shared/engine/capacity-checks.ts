@@ -20,7 +20,9 @@ export function workingLoadLimit(
 }
 
 /**
- * Each lift line against slack (zero or negative load) and against its working load limit.
+ * Each lift line against slack (zero or negative load) and against its working load limit. With `tensionOnly`
+ * loads (lines that can only pull) each line is checked against the larger of its two loads, and when the
+ * batten still hangs level the slack lines are left to `slackChecks`, which says what the others carry.
  *
  * @example
  * lineChecks([Dec(-3)], [20], 'imperial')[0]!.code // 'line-slack'
@@ -30,14 +32,17 @@ export function lineChecks(
   positions: readonly number[],
   units: UnitSystem,
   line?: { breakingStrength?: number; designFactor?: number },
+  tensionOnly?: { lineLoads: readonly Decimal[]; stable: boolean },
 ): Check[] {
   const checks: Check[] = []
   const place = (k: number) => `Lift line at ${formatQuantity(positions[k]!, 'length', units)}`
   const limit =
     line?.breakingStrength === undefined ? undefined : workingLoadLimit(line.breakingStrength, line.designFactor)
   const weight = (value: Decimal.Value) => formatQuantity(value, 'weight', units)
+  // When the batten still hangs level, the slack lines are told once, with what the other lines then carry.
+  const tellSlack = !tensionOnly?.stable
   loads.forEach((load, k) => {
-    if (load.lt(0))
+    if (tellSlack && load.lt(0))
       checks.push(
         check(
           'line-slack',
@@ -45,14 +50,21 @@ export function lineChecks(
           `${place(k)} would have to push up ${weight(load.neg())}: it goes slack and the batten lifts there; move load or add a line`,
         ),
       )
-    else if (load.isZero()) checks.push(check('line-slack', 'danger', `${place(k)} carries no load and hangs slack`))
-    if (limit && load.gt(limit)) {
+    else if (tellSlack && load.isZero())
+      checks.push(check('line-slack', 'danger', `${place(k)} carries no load and hangs slack`))
+    const slackLoad = tensionOnly?.stable ? tensionOnly.lineLoads[k] : undefined
+    const larger = slackLoad && slackLoad.gt(load) ? slackLoad : load
+    if (limit && larger.gt(limit)) {
       const factor = line?.designFactor ?? DEFAULT_DESIGN_FACTOR
+      const carries =
+        larger === load
+          ? `carries ${weight(load)}`
+          : `carries ${weight(larger)} once a line goes slack (${weight(load)} as a rigid line)`
       checks.push(
         check(
           'line-over-limit',
           'danger',
-          `${place(k)} carries ${weight(load)}, above its working load limit of ${weight(limit)} (${weight(line!.breakingStrength!)} ÷ ${factor})`,
+          `${place(k)} ${carries}, above its working load limit of ${weight(limit)} (${weight(line!.breakingStrength!)} ÷ ${factor})`,
         ),
       )
     }

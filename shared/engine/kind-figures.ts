@@ -13,20 +13,21 @@ const r = (value: Decimal.Value) => roundTo(value, 2)
 type KindFigures = Pick<CalculationResult, 'counterweight' | 'travel' | 'haul' | 'motor'>
 
 /**
- * The figures particular to the lineset's kind, adding their findings to `checks`.
+ * The figures particular to the lineset's kind, adding their findings to `checks`. A batten that tips
+ * (`tips`) gets no counterweight plan: balancing the arbor against it would read as a set that can fly.
  *
  * @example
  * kindFigures(input, { totalLoad: Dec(1208.8), lineLoads }, checks).counterweight?.ratio // 1
  */
 export function kindFigures(
   input: CalculationInput,
-  loads: { totalLoad: Decimal; lineLoads: Decimal[] },
+  loads: { totalLoad: Decimal; lineLoads: Decimal[]; tips?: boolean },
   checks: Check[],
 ): KindFigures {
   const { units } = input
   const { totalLoad } = loads
   if (input.kind === 'counterweight-single' || input.kind === 'counterweight-double')
-    return counterweightFigures(input, totalLoad, checks)
+    return loads.tips ? {} : counterweightFigures(input, totalLoad, checks)
   const figures: KindFigures = {}
   const travel = battenTravel(input)
   if (travel) figures.travel = { batten: r(travel) }

@@ -17,6 +17,19 @@ export interface LineLoad {
   load: number
 }
 
+/**
+ * The loads when lift lines can only pull: a line the rigid solution has pushing (zero load or below) goes slack
+ * and the batten's weight moves onto the others. `stable` is false when the batten then cannot hang level (fewer
+ * than two lines hold, or the load's centre lies beyond the lines): it tips, and the loads shown are the line it
+ * swings about carrying everything.
+ */
+export interface TensionOnlyResult {
+  lineLoads: LineLoad[]
+  /** Indices (in pick point order) of the lines carrying no load. */
+  slackLines: number[]
+  stable: boolean
+}
+
 /** Unit labels for every figure in a result. */
 export interface ResultUnitLabels {
   weight: string
@@ -60,7 +73,10 @@ export interface CalculationResult {
   hardwareWeight: number
   itemsWeight: number
   totalLoad: number
+  /** Loads with every line rigid (a line may come out pushing: negative). */
   lineLoads: LineLoad[]
+  /** Present whenever a rigid line load is zero or below; moment, stress and deflection then follow it when stable. */
+  tensionOnly?: TensionOnlyResult
   /** Working load limit of one lift line (breaking strength / design factor), when given. */
   lineWorkingLoadLimit?: number
   /** Largest bending moment along the batten; negative is hogging (over a line), positive sagging. */

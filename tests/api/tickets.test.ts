@@ -123,6 +123,18 @@ describe('opening a ticket', () => {
     expect(res.body.error.code).toBe('not_counterweight')
   })
 
+  it('when the hang would tip its batten, then no ticket opens and the 409 says why in words', async () => {
+    // Two lines at 0 and 10 ft under a 40 ft batten: the centre of load (20 ft) lies beyond the line at 10 ft.
+    const { id: linesetId, hang } = await hung(200, { pickPoints: [0, 10] })
+    const res = await open(operator, hang.id)
+    expect(res.status).toBe(409)
+    expect(res.body.error.code).toBe('batten_tips')
+    expect(res.body.error.message).toMatch(
+      /^No ticket can open on lineset \d+: The batten cannot hang level: the centre of its load, at 20 ft, lies beyond the end line at 10 ft, so it tips\. No brick plan is offered/,
+    )
+    expect(await operatingStatusOf(stageManager, linesetId)).not.toBe('awaiting-approval')
+  })
+
   it("when another venue's hang is named, then it answers 404; a stage manager is refused with 403", async () => {
     const { hang } = await hung()
     expect((await open(otherVenue, hang.id)).status).toBe(404)

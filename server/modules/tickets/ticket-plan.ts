@@ -61,6 +61,9 @@ export async function planTicket(
     })),
   }
   const outcome = await tx.calculations.run(input)
+  // A batten that cannot hang level has no plan to load: say why rather than that the figures are missing.
+  const tips = outcome.ok ? outcome.result.checks.find((found) => found.code === 'batten-tips') : undefined
+  if (tips) throw new AppError(409, 'batten_tips', `No ticket can open on lineset ${lineset.number}: ${tips.message}`)
   const counterweight = outcome.ok ? outcome.result.counterweight : undefined
   if (!counterweight)
     throw new AppError(

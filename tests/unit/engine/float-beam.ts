@@ -13,6 +13,14 @@ export interface FloatLoads {
  * line, plus vertical and moment equilibrium, solved with mathjs lusolve.
  */
 export function floatReactions(loads: FloatLoads): number[] {
+  return floatBeam(loads).reactions
+}
+
+/**
+ * The same solve, with the deflected shape as EI·y (up positive, zero at every line) from the rigid-body terms:
+ * y(x) = Σ R·<x − xj>³/6 + C1 + C2·x − the loads' own terms.
+ */
+export function floatBeam(loads: FloatLoads): { reactions: number[]; shape: (x: number) => number } {
   const xs = loads.pickPoints
   const n = xs.length
   const ramp = (x: number, a: number, power: number) => (x > a ? (x - a) ** power : 0)
@@ -38,6 +46,10 @@ export function floatReactions(loads: FloatLoads): number[] {
   rhs.push(weight)
   matrix.push([...xs, 0, 0])
   rhs.push(moment)
-  const solution = lusolve(matrix, rhs) as number[][]
-  return solution.slice(0, n).map((row) => row[0]!)
+  const solution = (lusolve(matrix, rhs) as number[][]).map((row) => row[0]!)
+  const reactions = solution.slice(0, n)
+  const [c1, c2] = [solution[n]!, solution[n + 1]!]
+  const shape = (x: number) =>
+    xs.reduce((y, xj, j) => y + (reactions[j]! * ramp(x, xj, 3)) / 6, c1 + c2 * x + loadShape(x))
+  return { reactions, shape }
 }

@@ -16,6 +16,8 @@ export interface LoadFigures {
   /** Answers that were not 2xx, and socket errors or timeouts: a figure with either is not a fair one. */
   failures: number
   bytesPerAnswer: number
+  /** CPU milliseconds per answer of each process `driveLoad` was given to watch (the server, the database). */
+  cpuMsPerAnswer: number[]
 }
 
 const percentile = (sorted: number[], share: number) =>
@@ -26,7 +28,12 @@ const percentile = (sorted: number[], share: number) =>
  * Median and p95 come from every answer's own time (autocannon's `response` event), not from its summary,
  * which reports p97.5 and p99 but no p95.
  */
-export async function driveLoad(target: LoadTarget, seconds: number, warmUpSeconds = 2): Promise<LoadFigures> {
+export async function driveLoad(
+  target: LoadTarget,
+  seconds: number,
+  cpuCounters: () => number[] = () => [],
+  warmUpSeconds = 2,
+): Promise<LoadFigures> {
   const options = {
     url: target.url,
     method: target.method ?? 'GET',
@@ -36,10 +43,12 @@ export async function driveLoad(target: LoadTarget, seconds: number, warmUpSecon
   }
   await autocannon({ ...options, duration: warmUpSeconds })
   const times: number[] = []
+  const cpuBefore = cpuCounters()
   const result = await new Promise<autocannon.Result>((resolve, reject) => {
     const run = autocannon({ ...options, duration: seconds }, (error, done) => (error ? reject(error) : resolve(done)))
     run.on('response', (_client, _status, _bytes, responseTime) => times.push(responseTime))
   })
+  const cpuAfter = cpuCounters()
   times.sort((a, b) => a - b)
   return {
     name: target.name,
@@ -48,5 +57,6 @@ export async function driveLoad(target: LoadTarget, seconds: number, warmUpSecon
     p95Ms: percentile(times, 0.95),
     failures: result.non2xx + result.errors + result.timeouts,
     bytesPerAnswer: result.requests.total ? result.throughput.total / result.requests.total : 0,
+    cpuMsPerAnswer: cpuAfter.map((after, k) => (after - cpuBefore[k]!) / Math.max(1, result.requests.total)),
   }
 }

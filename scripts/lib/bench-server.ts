@@ -6,6 +6,7 @@ import { projectRoot } from './paths.js'
 
 export interface ChildServer {
   url: string
+  pid: number
   stop(): Promise<void>
 }
 
@@ -35,7 +36,7 @@ export async function startAppServer(env: Record<string, string>, nodeFlags: str
     stdio: ['ignore', 'pipe', 'inherit'],
   })
   const url = await firstLineMatching(child, /serving on (http\S+)/)
-  return { url, stop: stopper(child) }
+  return { url, pid: child.pid!, stop: stopper(child) }
 }
 
 export async function startBareServer(): Promise<ChildServer> {
@@ -44,5 +45,5 @@ export async function startBareServer(): Promise<ChildServer> {
     stdio: ['ignore', 'pipe', 'inherit'],
   })
   const port = await firstLineMatching(child, /^(\d+)$/)
-  return { url: `http://127.0.0.1:${port}`, stop: stopper(child) }
+  return { url: `http://127.0.0.1:${port}`, pid: child.pid!, stop: stopper(child) }
 }

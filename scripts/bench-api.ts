@@ -11,6 +11,7 @@ import { randomBytes } from 'node:crypto'
 import { existsSync, mkdtempSync, readFileSync, rmSync } from 'node:fs'
 import { tmpdir } from 'node:os'
 import { join } from 'node:path'
+import { runCalculation } from '../shared/engine/calculate.js'
 import { createApp } from '../server/app.js'
 import { loadConfig } from '../server/config.js'
 import { migrate } from '../server/db/migrate.js'
@@ -30,6 +31,17 @@ const SECONDS = Number(process.env.BENCH_SECONDS ?? 10)
 const ONLY = process.env.BENCH_ONLY ?? ''
 const LIST_P95_TARGET_MS = 25
 const CALCULATION_RATIO_TARGET = 0.5
+
+/** Median milliseconds of `runCalculation` (schema and engine, no HTTP, no thread) over 200 runs after 50. */
+function engineAlone(body: unknown): number {
+  for (let i = 0; i < 50; i++) runCalculation(body)
+  const times = Array.from({ length: 200 }, () => {
+    const start = process.hrtime.bigint()
+    runCalculation(body)
+    return Number(process.hrtime.bigint() - start) / 1e6
+  }).sort((a, b) => a - b)
+  return times[100]!
+}
 
 const say = (line: string) => console.log(`bench:api: ${line}`)
 const row = (f: LoadFigures) =>
@@ -101,6 +113,13 @@ async function main() {
         ? calculation.requestsPerSecond / figures.get('bare Express JSON route')!.requestsPerSecond
         : NaN
       say(`calculations / bare: ${ratio.toFixed(2)} (target >= ${CALCULATION_RATIO_TARGET})`)
+      if (calculation) {
+        const engine = engineAlone(calculationOfItems(20))
+        say(
+          `the engine alone on the same body, in this process: median ${engine.toFixed(2)} ms, so one calculation ` +
+            `thread serves at most ~${(1000 / engine).toFixed(0)} calculations/s`,
+        )
+      }
       for (const name of ['GET /api/v1/linesets', 'GET /api/v1/board']) {
         const f = figures.get(name)
         if (f) say(`${name} p95 ${f.p95Ms.toFixed(1)} ms (target < ${LIST_P95_TARGET_MS} ms)`)

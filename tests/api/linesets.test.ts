@@ -63,7 +63,9 @@ describe('lineset figures are stored exactly in SI', () => {
 
 describe('the lineset list', () => {
   it('when the list is read, then every lineset in it reads exactly as its own page does, figure for figure', async () => {
-    await admin.post('/api/v1/linesets', sampleLineset(61, { ratedLoad: 1234.567891, pipeWeightPerLength: 2.72 })).expect(201)
+    await admin
+      .post('/api/v1/linesets', sampleLineset(61, { ratedLoad: 1234.567891, pipeWeightPerLength: 2.72 }))
+      .expect(201)
     const list = (await admin.get('/api/v1/linesets').expect(200)).body as { id: string; currentHang: unknown }[]
     expect(list.length).toBeGreaterThan(1)
     for (const { currentHang, ...item } of list) {

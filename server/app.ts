@@ -65,7 +65,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
 
   const api = express.Router()
   api.use(express.json({ limit: '1mb' }))
-  api.use(sessions.middleware)
+  api.use(...sessions.middleware)
   api.use(passport.initialize())
   api.use(passport.session())
   api.use(csrf.requireToken)

@@ -1,15 +1,44 @@
-import connectPgSimple from 'connect-pg-simple'
 import session from 'express-session'
+import type { RequestHandler } from 'express'
 import type pg from 'pg'
 import type { Config } from '../config.js'
+import { SessionStore } from './session-store.js'
 
-const PgStore = connectPgSimple(session)
-const TWELVE_HOURS = 12 * 60 * 60 * 1000
+/** A session ends after this long without a request. */
+export const SESSION_LIFETIME_MS = 12 * 60 * 60 * 1000
+/**
+ * A signed-in session's expiry moves forward once this much of its lifetime has passed since it last moved,
+ * not on every request: an idle session still ends between 11 and 12 hours after its last request, and a
+ * read costs no write.
+ */
+export const SESSION_ROLL_AFTER_MS = 60 * 60 * 1000
 
-/** Sessions live in PostgreSQL (table `sessions`, made by a migration), so they survive restarts and are shared. */
+declare module 'express-session' {
+  interface SessionData {
+    /** When the expiry last moved (ms since the epoch); changing it is what saves the session. */
+    rolledAt?: number
+  }
+}
+
+const signedIn = (data: object | undefined) => Boolean((data as { passport?: { user?: unknown } })?.passport?.user)
+
+/**
+ * Saves a signed-in session whose expiry is due to move: the save writes the new expiry with the session and
+ * sends the cookie again with it. `cookie.expires` is as loaded here (express-session moves it only later).
+ */
+const rollWhenDue: RequestHandler = (req, _res, next) => {
+  const expires = req.session?.cookie.expires
+  if (signedIn(req.session) && expires && expires.getTime() - Date.now() < SESSION_LIFETIME_MS - SESSION_ROLL_AFTER_MS)
+    req.session.rolledAt = Date.now()
+  next()
+}
+
+/**
+ * Sessions live in PostgreSQL (table `sessions`, made by a migration), so they survive restarts and are shared
+ * by every app process; nothing about them is kept in a process's memory.
+ */
 export function sessionMiddleware(config: Config, pool: pg.Pool) {
-  const store = new PgStore({
-    pool,
+  const store = new SessionStore(pool, {
     tableName: 'sessions',
     createTableIfMissing: false,
     // Tests start and stop many servers; a pruning timer would outlive them.
@@ -22,8 +51,8 @@ export function sessionMiddleware(config: Config, pool: pg.Pool) {
     store,
     resave: false,
     saveUninitialized: false,
-    rolling: true,
-    cookie: { httpOnly: true, sameSite: 'lax', secure: config.secureCookies, maxAge: TWELVE_HOURS },
+    rolling: false,
+    cookie: { httpOnly: true, sameSite: 'lax', secure: config.secureCookies, maxAge: SESSION_LIFETIME_MS },
   })
-  return { middleware, close: () => store.close() }
+  return { middleware: [middleware, rollWhenDue], close: () => store.close() }
 }

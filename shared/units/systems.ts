@@ -91,6 +91,16 @@ export function fromSI(value: DecimalInput, quantity: Quantity, system: UnitSyst
 }
 
 /**
+ * How many SI units one unit of a quantity is in a system (the factor `toSI` multiplies by).
+ *
+ * @example
+ * siPerUnit('weight', 'imperial').toString() // '0.45359237'
+ */
+export function siPerUnit(quantity: Quantity, system: UnitSystem) {
+  return UNITS[quantity][system].siPerUnit
+}
+
+/**
  * Converts a figure between unit systems, unrounded.
  *
  * @example

@@ -61,6 +61,20 @@ describe('lineset figures are stored exactly in SI', () => {
   })
 })
 
+describe('the lineset list', () => {
+  it('when the list is read, then every lineset in it reads exactly as its own page does, figure for figure', async () => {
+    await admin
+      .post('/api/v1/linesets', sampleLineset(61, { ratedLoad: 1234.567891, pipeWeightPerLength: 2.72 }))
+      .expect(201)
+    const list = (await admin.get('/api/v1/linesets').expect(200)).body as { id: string; currentHang: unknown }[]
+    expect(list.length).toBeGreaterThan(1)
+    for (const { currentHang, ...item } of list) {
+      expect(item).toEqual((await admin.get(`/api/v1/linesets/${item.id}`).expect(200)).body)
+      void currentHang
+    }
+  })
+})
+
 describe('lineset history', () => {
   it('when a lineset is added, changed and retired, then its ledger holds one entry for each, in order', async () => {
     const created = (await admin.post('/api/v1/linesets', sampleLineset(5)).expect(201)).body

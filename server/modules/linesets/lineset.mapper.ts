@@ -1,6 +1,7 @@
 import { LINESET_FIGURE_QUANTITIES, type Lineset, type LinesetInput } from '../../../shared/schemas/lineset.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 import { apiFromStored, storedFromApi, toApiFields, toStoredFields } from '../../db/quantities.js'
+import type { InferAttributes } from 'sequelize'
 import type { LinesetModel } from './lineset.model.js'
 
 const LINESET_QUANTITIES = LINESET_FIGURE_QUANTITIES
@@ -41,11 +42,14 @@ export function storedToApi(stored: StoredLineset, system: UnitSystem): Omit<Lin
 }
 
 /** The stored fields of a row, as the ledger keeps them. */
-export function storedFromRow(row: LinesetModel): StoredLineset {
-  return Object.fromEntries(STORED_FIELDS.map((field) => [field, row.get(field)])) as StoredLineset
+export function storedFromRow(row: LinesetRow): StoredLineset {
+  return Object.fromEntries(STORED_FIELDS.map((field) => [field, row[field as keyof LinesetRow]])) as StoredLineset
 }
 
-export function linesetToApi(row: LinesetModel, system: UnitSystem): Lineset {
+/** A lineset row: a model instance, or the plain attributes of a `raw` read (lists read thousands of figures). */
+export type LinesetRow = InferAttributes<LinesetModel>
+
+export function linesetToApi(row: LinesetRow, system: UnitSystem): Lineset {
   return {
     id: row.id,
     version: row.version,

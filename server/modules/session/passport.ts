@@ -1,5 +1,7 @@
 import { Passport } from 'passport'
 import { Strategy as LocalStrategy } from 'passport-local'
+import type { SessionUser } from '../../../shared/schemas/session.js'
+import { MEMBER_READ_WITH_SESSION } from '../../http/session-store.js'
 import { visitorContext, type AppContext } from '../../context.js'
 import { authenticate, memberFor, type SessionKey } from './session.service.js'
 
@@ -12,7 +14,9 @@ export function createPassport(app: AppContext) {
     }),
   )
   passport.serializeUser<SessionKey>((user, done) => done(null, { userId: user.id, venueId: user.venueId }))
-  passport.deserializeUser<SessionKey>((key, done) => {
+  passport.deserializeUser<SessionKey & { [MEMBER_READ_WITH_SESSION]?: SessionUser | null }>((key, done) => {
+    // The session store read the member with the session, in the same query: no second round trip.
+    if (MEMBER_READ_WITH_SESSION in key) return done(null, key[MEMBER_READ_WITH_SESSION] ?? false)
     memberFor(visitorContext(app), key).then((user) => done(null, user ?? false), done)
   })
   return passport

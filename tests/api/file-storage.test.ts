@@ -18,9 +18,9 @@ describe('file storage in a folder', () => {
     expect((await storage.get(key))!.toString()).toBe('%PDF- a drawing')
     await storage.put(key, Buffer.from('replaced'))
     expect((await storage.get(key))!.toString()).toBe('replaced')
-    await storage.remove(key)
+    await storage.delete(key)
     expect(await storage.get(key)).toBeNull()
-    await storage.remove(key) // removing what is gone is not an error
+    await storage.delete(key) // removing what is gone is not an error
   })
 
   it('when a key would leave the folder, then it is refused before the disk is touched', async () => {

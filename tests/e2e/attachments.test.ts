@@ -23,7 +23,13 @@ describe('attaching a photo to a lineset', () => {
     await row.scrollIntoViewIfNeeded()
     // The thumbnail loaded: the browser decoded the image the server made.
     await expect
-      .poll(() => row.locator('img').evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth))
+      // The node project has no DOM types: the page's image is read by the two properties wanted.
+      .poll(() =>
+        row.locator('img').evaluate((img) => {
+          const image = img as unknown as { complete: boolean; naturalWidth: number }
+          return image.complete && image.naturalWidth
+        }),
+      )
       .toBe(320)
 
     await panel

@@ -3,6 +3,7 @@ import type { Config } from './config.js'
 import type { AppContext } from './context.js'
 import type { Database } from './db/models.js'
 import { localFolderStorage } from './files/local-folder-storage.js'
+import { s3Storage } from './files/s3-storage.js'
 import { postgresLivePublisher } from './live/postgres-live.js'
 import { createCalculationPool } from './modules/calculations/calculation-pool.js'
 import { mailNotConfigured, smtpMailSender } from './mail/smtp-mail-sender.js'
@@ -20,7 +21,7 @@ export function buildAppContext(config: Config, db: Database, overrides: AppOver
     mail,
     outbox: overrides.outbox ?? createOutboxCourier({ db, mail, clock, policy: config.outbox }),
     live: overrides.live ?? postgresLivePublisher(db.sequelize),
-    files: overrides.files ?? localFolderStorage(config.fileStorageDir),
+    files: overrides.files ?? (config.s3 ? s3Storage(config.s3) : localFolderStorage(config.fileStorageDir)),
     clock,
     calculations: overrides.calculations ?? createCalculationPool(),
     publicUrl: overrides.publicUrl ?? config.publicUrl,

@@ -12,6 +12,7 @@ import { noStore, securityHeaders } from './http/headers.js'
 import { mountedRoutes, type MountedRoute } from './http/mounted-routes.js'
 import { sessionMiddleware } from './http/session.js'
 import { arborRoutes } from './modules/arbors/arbor.routes.js'
+import { attachmentRoutes, linesetAttachmentRoutes } from './modules/attachments/attachment.routes.js'
 import { brickStockRoutes } from './modules/brick-stock/brick-stock.routes.js'
 import { lockoutRoutes } from './modules/lockouts/lockout.routes.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
@@ -76,6 +77,8 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/linesets', hangRoutes(context)],
     ['/linesets', arborRoutes(context)],
     ['/linesets', lockoutRoutes(context)],
+    ['/linesets', linesetAttachmentRoutes(context)],
+    ['/attachments', attachmentRoutes(context)],
     ['/brick-stock', brickStockRoutes(context)],
     ['/brick-types', brickTypeRoutes(context)],
     ['/item-types', itemTypeRoutes(context)],

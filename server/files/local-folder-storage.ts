@@ -1,19 +1,15 @@
-import { mkdir, readFile, rename, rm, writeFile } from 'node:fs/promises'
+import { access, mkdir, readFile, rename, rm, writeFile } from 'node:fs/promises'
 import { dirname, join, resolve, sep } from 'node:path'
 import { randomBytes } from 'node:crypto'
-import type { FileStorage } from './file-storage.js'
-
-// Keys are made by the app, never typed by a person; anything else is a bug, refused before it reaches the disk.
-const SAFE_KEY = /^[A-Za-z0-9][A-Za-z0-9_.-]*(\/[A-Za-z0-9][A-Za-z0-9_.-]*)*$/
+import { checkStorageKey, type FileStorage } from './file-storage.js'
 
 /** Files under one folder on this machine, one file per key. */
 export function localFolderStorage(folder: string): FileStorage {
   const root = resolve(folder)
   const pathFor = (key: string) => {
-    const path = join(root, ...key.split('/'))
+    const path = join(root, ...checkStorageKey(key).split('/'))
     // Every part starts with a letter or digit, so none is `.` or `..`; the prefix check says it twice.
-    if (!SAFE_KEY.test(key) || !path.startsWith(root + sep))
-      throw new Error(`Not a storage key: ${JSON.stringify(key)}`)
+    if (!path.startsWith(root + sep)) throw new Error(`Not a storage key: ${JSON.stringify(key)}`)
     return path
   }
   return {
@@ -22,8 +18,13 @@ export function localFolderStorage(folder: string): FileStorage {
       await mkdir(dirname(path), { recursive: true })
       // Written beside it and renamed, so a reader never sees half a file.
       const partial = `${path}.${randomBytes(6).toString('hex')}.partial`
-      await writeFile(partial, bytes)
-      await rename(partial, path)
+      try {
+        await writeFile(partial, bytes)
+        await rename(partial, path)
+      } catch (error) {
+        await rm(partial, { force: true })
+        throw error
+      }
     },
     async get(key) {
       try {
@@ -33,8 +34,14 @@ export function localFolderStorage(folder: string): FileStorage {
         throw error
       }
     },
-    async remove(key) {
+    async delete(key) {
       await rm(pathFor(key), { force: true })
+    },
+    async exists(key) {
+      return access(pathFor(key)).then(
+        () => true,
+        () => false,
+      )
     },
   }
 }

@@ -16,6 +16,8 @@ export interface LiveEvent {
     | 'ticket-withdrawn'
     | 'ticket-loading'
     | 'ticket-loaded'
+    | 'attachment-added'
+    | 'attachment-removed'
   venueId: string
   linesetId: string
 }

@@ -1,7 +1,9 @@
+import { readdirSync } from 'node:fs'
 import fc from 'fast-check'
 import { describe, expect, it } from 'vitest'
 import { databaseFingerprint } from '../support/database-fingerprint.js'
 import { sampleBrickType, sampleLineset, type VenueFixture } from '../support/fixtures.js'
+import { multipartBody } from '../support/upload-files.js'
 import { venueSuite } from '../support/venue-suite.js'
 
 // A few hundred generated bad bodies across every write route, sent by an administrator (who may call
@@ -157,6 +159,8 @@ const TARGETS: Target[] = [
     }),
   },
   { method: 'post', path: () => '/api/v1/calculations', valid: () => calculation as Record<string, Json> },
+  // Without a file an upload is always refused; the multipart upload has its own generated bodies below.
+  { method: 'post', path: (v) => `/api/v1/linesets/${v.linesetId}/attachments`, valid: () => ({ hangItemId: null }) },
   { method: 'post', path: () => '/api/v1/invitations/lookup', valid: () => ({ token: 'a'.repeat(43) }) },
   {
     method: 'post',
@@ -306,14 +310,80 @@ describe('generated bad requests', () => {
     )
     const id = fc.oneof(fc.string({ minLength: 1 }), fc.constantFrom('%00', '..%2F..', '0'.repeat(500), '%E0%A4%A'))
     await fc.assert(
-      fc.asyncProperty(id, fc.constantFrom('linesets', 'brick-types', 'people', 'invitations'), async (odd, noun) => {
-        await expectCleanAnswer(() =>
-          suite.client.agent
-            .delete(`/api/v1/${noun}/${encodeURIComponent(odd)}`)
-            .set('X-CSRF-Token', suite.client.csrfToken),
-        )
-      }),
+      fc.asyncProperty(
+        id,
+        fc.constantFrom('linesets', 'brick-types', 'people', 'invitations', 'attachments'),
+        async (odd, noun) => {
+          await expectCleanAnswer(() =>
+            suite.client.agent
+              .delete(`/api/v1/${noun}/${encodeURIComponent(odd)}`)
+              .set('X-CSRF-Token', suite.client.csrfToken),
+          )
+        },
+      ),
       { numRuns: 30, seed: 20261203 },
+    )
+  })
+})
+
+describe('generated bad uploads', () => {
+  const SIGNATURES = [
+    Buffer.from('89504e470d0a1a0a', 'hex'), // PNG
+    Buffer.from('ffd8ffe0', 'hex'), // JPEG
+    Buffer.from('RIFF\x10\x00\x00\x00WEBPVP8 ', 'latin1'),
+    Buffer.from('%PDF-1.7\n'),
+    Buffer.from('MZ'),
+    Buffer.from('<!doctype html><script>'),
+    Buffer.alloc(0),
+  ]
+  const name = fc.tuple(
+    fc.oneof(
+      fc.string({ maxLength: 30 }),
+      fc.string({ unit: 'binary', maxLength: 30 }),
+      fc.constantFrom('../../x', '..\\x', '%2e%2e%2f', '.x', 'a\u202Eb', 'a\u0000b', 'a\r\nb', 'x'.repeat(400)),
+    ),
+    fc.constantFrom('.png', '.PNG', '.jpg', '.jpeg', '.webp', '.pdf', '.exe', '.html', '', '.'),
+  )
+  const fileNameHeader = (given: string) => {
+    try {
+      return `filename*=UTF-8''${encodeURIComponent(given)}`
+    } catch {
+      // A lone surrogate cannot be percent-encoded; send it as the raw bytes a careless client would.
+      return `filename="${given.replace(/["\r\n\\]/g, '_')}"`
+    }
+  }
+  const hangItemId = fc.option(fc.oneof(fc.uuid(), fc.string({ maxLength: 50 }), fc.constant('')), { nil: undefined })
+
+  it('when POST /api/v1/linesets/:id/attachments gets odd names, contents and fields, then it never answers 500 and a refusal stores nothing', async () => {
+    const storedFiles = () => readdirSync(suite.app.config.fileStorageDir, { recursive: true }).length
+    await fc.assert(
+      fc.asyncProperty(
+        name,
+        fc.constantFrom(...SIGNATURES),
+        fc.uint8Array({ maxLength: 2048 }),
+        hangItemId,
+        fc.boolean(),
+        async ([stem, ending], signature, rest, itemId, cutShort) => {
+          const { body, contentType } = multipartBody({
+            fileNameHeader: fileNameHeader(stem + ending),
+            bytes: Buffer.concat([signature, rest]),
+            fields: itemId === undefined ? {} : { hangItemId: itemId },
+          })
+          const filesBefore = storedFiles()
+          await expectCleanAnswer(() =>
+            suite.client.agent
+              .post(`/api/v1/linesets/${suite.venue.linesetId}/attachments`)
+              .set('X-CSRF-Token', suite.client.csrfToken)
+              .set('Content-Type', contentType)
+              .send(cutShort ? body.subarray(0, body.length - 20) : body)
+              .then((res) => {
+                if (res.status >= 400) expect(storedFiles()).toBe(filesBefore)
+                return res
+              }),
+          )
+        },
+      ),
+      { numRuns: 60, seed: 20261203 },
     )
   })
 })

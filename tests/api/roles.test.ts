@@ -135,6 +135,17 @@ const ROUTES: RouteCase[] = [
     expected: editors(404),
   },
   { method: 'get', path: () => '/api/v1/brick-stock', expected: all(200) },
+  { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}/attachments`, expected: all(200) },
+  {
+    method: 'post',
+    path: (f) => `/api/v1/linesets/${f.linesetId}/attachments`,
+    // A JSON body carries no file: a role let through meets the 400 naming the file, one stopped meets 403.
+    body: () => ({ hangItemId: NO_TICKET }),
+    expected: hangEditors(400),
+  },
+  { method: 'get', path: () => `/api/v1/attachments/${NO_TICKET}/content`, expected: all(404) },
+  { method: 'get', path: () => `/api/v1/attachments/${NO_TICKET}/thumbnail`, expected: all(404) },
+  { method: 'delete', path: () => `/api/v1/attachments/${NO_TICKET}`, expected: hangEditors(404) },
   { method: 'get', path: () => '/api/v1/item-types', expected: all(200) },
   {
     method: 'post',

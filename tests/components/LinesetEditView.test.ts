@@ -33,6 +33,17 @@ vi.mock('../../src/api/arbors', () => ({
   },
 }))
 
+// The page's attachments panel lists none.
+vi.mock('../../src/api/attachments', () => ({
+  attachmentsApi: {
+    list: vi.fn(async () => []),
+    upload: vi.fn(),
+    remove: vi.fn(),
+    contentUrl: vi.fn(),
+    thumbnailUrl: vi.fn(),
+  },
+}))
+
 let wrapper: VueWrapper | undefined
 beforeEach(() => vi.mocked(linesetsApi.read).mockResolvedValue(lineset()))
 afterEach(() => {

@@ -1,6 +1,7 @@
 import { displayQuantity } from '../../../shared/units/display.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 import type { StoredLineset } from './lineset.mapper.js'
+import { summarizeAttachmentEvent } from '../attachments/attachment-event-summary.js'
 import { summarizeStockEvent } from './stock-event-summary.js'
 import { summarizeTicketEvent } from './ticket-event-summary.js'
 
@@ -55,7 +56,8 @@ function savedHangWords(hang: SavedHang | undefined, system: UnitSystem): string
 /** What a ledger entry says happened, in one plain sentence; `payload` with its figures in `system`. */
 export function summarizeLinesetEvent(type: string, payload: Record<string, unknown>, system: UnitSystem): string {
   const lineset = payload.lineset as Partial<StoredLineset> | undefined
-  const stock = summarizeStockEvent(type, payload) ?? summarizeTicketEvent(type, payload)
+  const stock =
+    summarizeStockEvent(type, payload) ?? summarizeTicketEvent(type, payload) ?? summarizeAttachmentEvent(type, payload)
   if (stock) return stock
   switch (type) {
     case 'lineset-added':

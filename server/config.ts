@@ -45,6 +45,8 @@ const configSchema = z.object({
   MAIL_RETRY_FIRST_SECONDS: z.coerce.number().int().min(1).max(86_400).default(30),
   /** ... up to this many seconds. */
   MAIL_RETRY_LONGEST_SECONDS: z.coerce.number().int().min(1).max(86_400).default(3_600),
+  /** How often an open board stream hears a comment line, in milliseconds (proxies close silent connections). */
+  BOARD_KEEPALIVE_MS: z.coerce.number().int().min(10).max(25_000).default(20_000),
 })
 
 export type Config = Readonly<{
@@ -65,6 +67,8 @@ export type Config = Readonly<{
   /** Absolute. */
   fileStorageDir: string
   outbox: OutboxPolicy
+  /** The board stream's keep-alive interval. */
+  boardKeepAliveMs: number
 }>
 
 /**
@@ -99,5 +103,6 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
       firstRetrySeconds: value.MAIL_RETRY_FIRST_SECONDS,
       longestRetrySeconds: Math.max(value.MAIL_RETRY_LONGEST_SECONDS, value.MAIL_RETRY_FIRST_SECONDS),
     }),
+    boardKeepAliveMs: value.BOARD_KEEPALIVE_MS,
   })
 }

@@ -157,6 +157,7 @@ const TARGETS: Target[] = [
     }),
   },
   { method: 'post', path: () => '/api/v1/calculations', valid: () => calculation as Record<string, Json> },
+  { method: 'post', path: () => '/api/v1/pre-run-checks', valid: () => ({ note: 'Fuzz check', productionId: null }) },
   { method: 'post', path: () => '/api/v1/invitations/lookup', valid: () => ({ token: 'a'.repeat(43) }) },
   {
     method: 'post',

@@ -5,6 +5,7 @@ import hangRevisions from './0004-hang-revisions.js'
 import arborContentsBrickStock from './0005-arbor-contents-brick-stock.js'
 import mailOutbox from './0006-mail-outbox.js'
 import ticketPlansDecisions from './0007-ticket-plans-decisions.js'
+import preRunChecks from './0008-pre-run-checks.js'
 
 export interface Migration {
   name: string
@@ -22,4 +23,5 @@ export const migrations: Migration[] = [
   arborContentsBrickStock,
   mailOutbox,
   ticketPlansDecisions,
+  preRunChecks,
 ]

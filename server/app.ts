@@ -9,10 +9,12 @@ import { defineModels, type Database } from './db/models.js'
 import { csrfProtection } from './http/csrf.js'
 import { apiNotFound, errorHandler } from './http/errors.js'
 import { noStore, securityHeaders } from './http/headers.js'
+import { createLiveHub, type LiveHub } from './live/live-hub.js'
 import { mountedRoutes, type MountedRoute } from './http/mounted-routes.js'
 import { sessionMiddleware } from './http/session.js'
 import { arborRoutes } from './modules/arbors/arbor.routes.js'
 import { attachmentRoutes, linesetAttachmentRoutes } from './modules/attachments/attachment.routes.js'
+import { boardRoutes } from './modules/board/board.routes.js'
 import { brickStockRoutes } from './modules/brick-stock/brick-stock.routes.js'
 import { lockoutRoutes } from './modules/lockouts/lockout.routes.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
@@ -24,6 +26,7 @@ import { invitationRoutes } from './modules/invitations/invitation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
 import { outboxRoutes } from './modules/outbox/outbox.routes.js'
 import { peopleRoutes } from './modules/people/people.routes.js'
+import { preRunCheckRoutes } from './modules/pre-run-checks/pre-run-check.routes.js'
 import { productionRoutes } from './modules/productions/production.routes.js'
 import { createPassport } from './modules/session/passport.js'
 import { sessionRoutes } from './modules/session/session.routes.js'
@@ -39,6 +42,8 @@ export interface AppHandle {
   routes: MountedRoute[]
   /** The thread the engine runs on (tests hold it to keep a calculation in flight). */
   calculations: CalculationPool
+  /** This process's one LISTEN connection and the board streams it feeds. */
+  liveHub: LiveHub
   close(): Promise<void>
 }
 
@@ -58,6 +63,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
   const passport = createPassport(context)
   const csrf = csrfProtection(config)
   const calculations = context.calculations
+  const liveHub = createLiveHub(config.databaseUrl)
   const app = express()
 
   app.set('trust proxy', config.trustProxy)
@@ -88,6 +94,8 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/outbox', outboxRoutes(context)],
     ['/tickets', ticketRoutes(context)],
     ['/calculations', calculationRoutes(calculations)],
+    ['/board', boardRoutes(context, liveHub, config.boardKeepAliveMs)],
+    ['/pre-run-checks', preRunCheckRoutes(context)],
   ] as const
   for (const [path, router] of mounts) api.use(path, router)
   api.use(apiNotFound)
@@ -108,7 +116,9 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     context,
     routes: mountedRoutes('/api/v1', mounts),
     calculations,
+    liveHub,
     close: async () => {
+      await liveHub.close()
       await context.outbox.close()
       await calculations.close()
       await sessions.close()

@@ -63,6 +63,8 @@ const configSchema = z
     MAIL_RETRY_FIRST_SECONDS: z.coerce.number().int().min(1).max(86_400).default(30),
     /** ... up to this many seconds. */
     MAIL_RETRY_LONGEST_SECONDS: z.coerce.number().int().min(1).max(86_400).default(3_600),
+    /** How often an open board stream hears a comment line, in milliseconds (proxies close silent connections). */
+    BOARD_KEEPALIVE_MS: z.coerce.number().int().min(10).max(25_000).default(20_000),
   })
   .refine((env) => env.FILE_STORAGE !== 's3' || env.S3_BUCKET, {
     path: ['S3_BUCKET'],
@@ -110,6 +112,8 @@ export type Config = Readonly<{
   /** Present when uploaded files go to an S3-compatible store instead of the folder. */
   s3?: S3StorageOptions
   outbox: OutboxPolicy
+  /** The board stream's keep-alive interval. */
+  boardKeepAliveMs: number
 }>
 
 /**
@@ -146,5 +150,6 @@ export function loadConfig(env: Record<string, string | undefined> = process.env
       firstRetrySeconds: value.MAIL_RETRY_FIRST_SECONDS,
       longestRetrySeconds: Math.max(value.MAIL_RETRY_LONGEST_SECONDS, value.MAIL_RETRY_FIRST_SECONDS),
     }),
+    boardKeepAliveMs: value.BOARD_KEEPALIVE_MS,
   })
 }

@@ -18,8 +18,15 @@ export interface LiveEvent {
     | 'ticket-loaded'
     | 'attachment-added'
     | 'attachment-removed'
+    | 'pre-run-check'
   venueId: string
-  linesetId: string
+  /** The lineset that changed; null for what concerns the whole venue (a pre-run check). */
+  linesetId: string | null
+  /**
+   * The ledger entry's (or pre-run check's) id: one sequence numbers both, so a board that reconnects asks
+   * for everything after the last id it heard.
+   */
+  eventId?: string
 }
 
 /** Announces changes to every app process; an event is delivered only if `transaction` commits. */

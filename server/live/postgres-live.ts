@@ -24,15 +24,35 @@ export interface LiveListener {
   close(): Promise<void>
 }
 
-/** Hears every live event on a dedicated connection (LISTEN holds its connection, so never a pooled one). */
-export async function listenLive(databaseUrl: string, onEvent: (event: LiveEvent) => void): Promise<LiveListener> {
+/**
+ * Hears every live event on a dedicated connection (LISTEN holds its connection, so never a pooled one).
+ * `onLost` is called once when the connection fails or ends other than by `close()`.
+ */
+export async function listenLive(
+  databaseUrl: string,
+  onEvent: (event: LiveEvent) => void,
+  onLost: () => void = () => {},
+): Promise<LiveListener> {
   const client = new pg.Client({ connectionString: databaseUrl })
-  client.on('error', () => {}) // a lost connection ends listening; the owner decides whether to listen again
+  let ended = false
+  const lost = () => {
+    if (ended) return
+    ended = true
+    onLost()
+  }
+  // A lost connection ends listening; the owner decides whether to listen again.
+  client.on('error', lost)
+  client.on('end', lost)
   await client.connect()
   client.on('notification', (message) => {
     if (message.channel !== LIVE_CHANNEL || !message.payload) return
     onEvent(JSON.parse(message.payload) as LiveEvent)
   })
   await client.query(`LISTEN ${LIVE_CHANNEL}`)
-  return { close: () => client.end() }
+  return {
+    close: () => {
+      ended = true
+      return client.end()
+    },
+  }
 }

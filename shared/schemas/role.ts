@@ -24,3 +24,8 @@ export const PRODUCTION_MANAGERS: readonly Role[] = ['administrator', 'technical
 
 export const canEditHangs = (role: Role | undefined) => !!role && HANG_EDITORS.includes(role)
 export const canManageProductions = (role: Role | undefined) => !!role && PRODUCTION_MANAGERS.includes(role)
+
+/** Who may record a pre-run check: the stage manager, and those who answer for the rigging. */
+export const PRE_RUN_CHECKERS: readonly Role[] = ['administrator', 'technical-director', 'stage-manager']
+
+export const canRecordPreRunCheck = (role: Role | undefined) => !!role && PRE_RUN_CHECKERS.includes(role)

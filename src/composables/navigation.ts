@@ -10,6 +10,7 @@ export interface NavigationEntry {
 }
 
 const ENTRIES: readonly NavigationEntry[] = [
+  { title: 'Board', icon: 'mdi-view-dashboard-outline', routeName: 'board', testid: 'nav-board', roles: ROLES },
   {
     title: 'Linesets',
     icon: 'mdi-format-list-numbered',

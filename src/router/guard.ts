@@ -1,5 +1,6 @@
 import type { NavigationGuardWithThis, RouteLocationRaw } from 'vue-router'
 import { useSessionStore } from '../stores/session'
+import { homeFor } from './routes'
 
 /** Only a path inside this app may be a place to come back to after signing in. */
 export function safeRedirect(value: unknown): string | undefined {
@@ -16,11 +17,11 @@ export const guardRoute: NavigationGuardWithThis<undefined> = async (to) => {
   } catch {
     // Without a session answer the server is unreachable; the sign-in page says so when it is tried.
   }
-  if (to.name === 'session-sign-in' && session.signedIn)
-    return safeRedirect(to.query.redirect) ?? { name: 'linesets-list' }
+  if (to.name === 'session-sign-in' && session.signedIn) return safeRedirect(to.query.redirect) ?? homeFor(session.role)
   if (to.meta.public) return true
   if (!session.signedIn) return signInFor(to.fullPath)
   const roles = to.meta.roles
   if (roles && (!session.role || !roles.includes(session.role))) return { name: 'linesets-list' }
+  if (to.name === 'home') return homeFor(session.role)
   return true
 }

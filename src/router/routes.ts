@@ -13,6 +13,9 @@ declare module 'vue-router' {
 
 const everyone: readonly Role[] = ROLES
 
+/** Where a person lands after signing in. */
+export const homeFor = (role: Role | undefined) => ({ name: role === 'stage-manager' ? 'board' : 'linesets-list' })
+
 export const routes: RouteRecordRaw[] = [
   {
     path: '/sign-in',
@@ -27,7 +30,15 @@ export const routes: RouteRecordRaw[] = [
     props: true,
     meta: { public: true, title: 'Invitation' },
   },
-  { path: '/', name: 'home', redirect: { name: 'linesets-list' } },
+  // The stage manager starts at the board, everyone else at the linesets: the guard sends each on once the
+  // session is known (a redirect here would run before it is).
+  { path: '/', name: 'home', component: () => import('../views/LinesetsListView.vue'), meta: { roles: everyone } },
+  {
+    path: '/board',
+    name: 'board',
+    component: () => import('../views/BoardView.vue'),
+    meta: { roles: everyone, title: 'Board' },
+  },
   {
     path: '/linesets',
     name: 'linesets-list',

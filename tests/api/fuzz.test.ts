@@ -161,6 +161,7 @@ const TARGETS: Target[] = [
   { method: 'post', path: () => '/api/v1/calculations', valid: () => calculation as Record<string, Json> },
   // Without a file an upload is always refused; the multipart upload has its own generated bodies below.
   { method: 'post', path: (v) => `/api/v1/linesets/${v.linesetId}/attachments`, valid: () => ({ hangItemId: null }) },
+  { method: 'post', path: () => '/api/v1/pre-run-checks', valid: () => ({ note: 'Fuzz check', productionId: null }) },
   { method: 'post', path: () => '/api/v1/invitations/lookup', valid: () => ({ token: 'a'.repeat(43) }) },
   {
     method: 'post',

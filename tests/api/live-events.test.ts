@@ -53,6 +53,7 @@ describe('live events', () => {
         type,
         venueId: venue.venueId,
         linesetId: created.id,
+        eventId: expect.stringMatching(/^[1-9]\d*$/),
       })
   })
 

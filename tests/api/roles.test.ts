@@ -1,3 +1,4 @@
+import type { IncomingMessage } from 'node:http'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { ROLES, type Role } from '../../shared/schemas/role.js'
 import { sampleBrickType, sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
@@ -11,6 +12,8 @@ interface RouteCase {
   path: (f: VenueFixture) => string
   body?: (f: VenueFixture, role: Role) => object
   expected: Record<Role, number>
+  /** An event stream: read only until its first bytes, then closed. */
+  stream?: true
 }
 
 const all = (status: number): Record<Role, number> => ({
@@ -36,6 +39,12 @@ const adminOnly = (ok: number): Record<Role, number> => ({
   'technical-director': 403,
   'fly-operator': 403,
   'stage-manager': 403,
+})
+const preRunCheckers = (ok: number): Record<Role, number> => ({
+  administrator: ok,
+  'technical-director': ok,
+  'fly-operator': 403,
+  'stage-manager': ok,
 })
 const numberFor: Record<Role, number> = {
   administrator: 101,
@@ -266,7 +275,35 @@ const ROUTES: RouteCase[] = [
     expected: hangEditors(404),
   },
   { method: 'post', path: () => '/api/v1/calculations', body: () => calculation, expected: all(200) },
+  { method: 'get', path: () => '/api/v1/board', expected: all(200) },
+  { method: 'get', path: () => '/api/v1/board/stream', expected: all(200), stream: true },
+  { method: 'get', path: () => '/api/v1/pre-run-checks', expected: all(200) },
+  { method: 'get', path: () => '/api/v1/pre-run-checks/latest', expected: all(200) },
+  {
+    method: 'post',
+    path: () => '/api/v1/pre-run-checks',
+    body: (_f, role) => ({ note: `Roles ${role}` }),
+    expected: preRunCheckers(201),
+  },
 ]
+
+/**
+ * Reads an event stream only until its first bytes arrive, then closes it (it would never end); any other
+ * answer (a refusal's JSON) is read whole.
+ */
+const untilFirstBytes = (res: IncomingMessage, done: (error: Error | null, body: unknown) => void) => {
+  if (!String(res.headers['content-type']).startsWith('text/event-stream')) {
+    let text = ''
+    res.setEncoding('utf8')
+    res.on('data', (chunk: string) => (text += chunk))
+    res.on('end', () => done(null, text ? JSON.parse(text) : {}))
+    return
+  }
+  res.once('data', () => {
+    done(null, {})
+    res.destroy()
+  })
+}
 
 let app: TestApp
 let venue: VenueFixture
@@ -282,6 +319,11 @@ afterAll(() => app.stop())
 const send = (client: Client, route: RouteCase, role: Role | null) => {
   const path = route.path(venue)
   const body = route.body?.(venue, role ?? 'administrator')
+  if (route.stream)
+    return client
+      .get(path)
+      .buffer(true)
+      .parse((res, done) => untilFirstBytes(res as unknown as IncomingMessage, done))
   return route.method === 'get' ? client.get(path) : client[route.method](path, body)
 }
 

@@ -27,6 +27,7 @@ async function navigationFor(role: Role) {
 describe('AppNavigation', () => {
   it('when a stage manager is signed in, then only the pages every role reads are offered', async () => {
     expect(await navigationFor('stage-manager')).toEqual([
+      'nav-board',
       'nav-linesets',
       'nav-tickets',
       'nav-bricks',
@@ -37,6 +38,7 @@ describe('AppNavigation', () => {
 
   it('when a technical director is signed in, then venue settings are offered but people are not', async () => {
     expect(await navigationFor('technical-director')).toEqual([
+      'nav-board',
       'nav-linesets',
       'nav-tickets',
       'nav-bricks',
@@ -48,6 +50,7 @@ describe('AppNavigation', () => {
 
   it('when an administrator is signed in, then every page is offered', async () => {
     expect(await navigationFor('administrator')).toEqual([
+      'nav-board',
       'nav-linesets',
       'nav-tickets',
       'nav-bricks',

@@ -20,6 +20,9 @@ describe('the stage manager reads the linesets before a run', () => {
   it('when the stage manager signs in, then every lineset is listed read-only in the venue units, and nothing leaves for another host', async () => {
     const page = await suite.context.newPage()
     await signIn(page, 'sm@demo.test')
+    // The stage manager lands on the board; the linesets are one step away.
+    await page.locator('[data-testid=board-linesets]').waitFor()
+    await page.goto(`${suite.app.url}/linesets`)
     const table = page.locator('[data-testid=linesets-table]')
     await table.waitFor()
     await page.locator('[data-testid=linesets-row-1]').waitFor()

@@ -5,6 +5,7 @@ import hangRevisions from './0004-hang-revisions.js'
 import arborContentsBrickStock from './0005-arbor-contents-brick-stock.js'
 import mailOutbox from './0006-mail-outbox.js'
 import ticketPlansDecisions from './0007-ticket-plans-decisions.js'
+import preRunChecks from './0008-pre-run-checks.js'
 import attachmentUploads from './0009-attachment-uploads.js'
 
 export interface Migration {
@@ -23,5 +24,6 @@ export const migrations: Migration[] = [
   arborContentsBrickStock,
   mailOutbox,
   ticketPlansDecisions,
+  preRunChecks,
   attachmentUploads,
 ]

@@ -10,10 +10,14 @@ export interface LedgerEntry {
   payload?: Record<string, unknown>
 }
 
-/** Appends to a lineset's ledger inside the caller's transaction, so the change and its record land together. */
+/**
+ * Appends to a lineset's ledger inside the caller's transaction, so the change and its record land together.
+ * Answers the entry's id.
+ */
 export async function appendLinesetEvent(tx: TransactionContext<SessionUser | null>, entry: LedgerEntry) {
-  await tx.db.models.LinesetEvent.create(
+  const row = await tx.db.models.LinesetEvent.create(
     { ...entry, occurredAt: tx.clock.now(), payload: entry.payload ?? {} },
     { transaction: tx.transaction },
   )
+  return String(row.id)
 }

@@ -8,11 +8,11 @@ import { appendLinesetEvent } from '../ledger/ledger.service.js'
  */
 export async function recordLinesetChange(
   tx: TransactionContext,
-  type: LiveEvent['type'],
+  type: Exclude<LiveEvent['type'], 'pre-run-check'>,
   linesetId: string,
   payload: Record<string, unknown> = {},
 ) {
   const venueId = tx.actor.venueId
-  await appendLinesetEvent(tx, { venueId, linesetId, actorId: tx.actor.id, eventType: type, payload })
-  await tx.live.publish({ type, venueId, linesetId }, tx.transaction)
+  const eventId = await appendLinesetEvent(tx, { venueId, linesetId, actorId: tx.actor.id, eventType: type, payload })
+  await tx.live.publish({ type, venueId, linesetId, eventId }, tx.transaction)
 }

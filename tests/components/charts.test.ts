@@ -1,5 +1,4 @@
 import { afterEach, describe, expect, it, vi } from 'vitest'
-import { defineComponent, h } from 'vue'
 import type { VueWrapper } from '@vue/test-utils'
 import { calculate } from '../../shared/engine/calculate.js'
 import { calculationInputSchema } from '../../shared/schemas/calculation.js'
@@ -8,22 +7,7 @@ import LinesetTravelBalance from '../../src/components/LinesetTravelBalance.vue'
 import BrickStockPicture from '../../src/components/BrickStockPicture.vue'
 import { mountWithApp } from './mount'
 
-// jsdom has no canvas: the chart package's components are stood in for by ones that keep what they were given.
-vi.mock('vue-chartjs', () => {
-  const stand = (kind: string) =>
-    defineComponent({
-      props: { data: { type: Object, required: true }, options: { type: Object, default: () => ({}) } },
-      setup:
-        (props, { attrs }) =>
-        () =>
-          h('canvas', {
-            ...attrs,
-            'data-chart': kind,
-            'data-sets': (props.data as { datasets: unknown[] }).datasets.length,
-          }),
-    })
-  return { Line: stand('line'), Bar: stand('bar') }
-})
+// The chart package's components are stood in for (tests/support/chart-stand-in.ts): jsdom has no canvas.
 
 let wrapper: VueWrapper | undefined
 afterEach(() => wrapper?.unmount())

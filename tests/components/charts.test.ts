@@ -7,7 +7,7 @@ import LinesetTravelBalance from '../../src/components/LinesetTravelBalance.vue'
 import BrickStockPicture from '../../src/components/BrickStockPicture.vue'
 import { mountWithApp } from './mount'
 
-// The chart package's components are stood in for (tests/support/chart-stand-in.ts): jsdom has no canvas.
+// The chart package's components are stood in for (tests/components/chartStandIn.ts): jsdom has no canvas.
 
 let wrapper: VueWrapper | undefined
 afterEach(() => wrapper?.unmount())

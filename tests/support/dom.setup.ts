@@ -45,5 +45,5 @@ window.matchMedia = (query: string) =>
 window.scrollTo = () => {}
 Element.prototype.scrollIntoView ??= () => {}
 
-// jsdom cannot draw on a canvas: the charts render stand-ins that keep their data (tests/support/chart-stand-in.ts).
-vi.mock('vue-chartjs', () => import('./chart-stand-in.js'))
+// jsdom cannot draw on a canvas: the charts render stand-ins that keep their data (tests/components/chartStandIn.ts).
+vi.mock('vue-chartjs', () => import('../components/chartStandIn'))

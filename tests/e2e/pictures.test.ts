@@ -67,6 +67,24 @@ describe('pictures of the hang', () => {
     await expect.poll(() => diagram.locator('.batten-diagram__print-label').first().isVisible()).toBe(true)
     await diagram.screenshot({ path: join(artifacts, 'pictures-batten-diagram-print-a4.png') })
     await page.emulateMedia({ media: 'screen' })
+    await page.setViewportSize({ width: 1280, height: 900 })
+
+    // Saved twice, the history draws each side's saved result.
+    await page.locator('[data-testid=hang-title] input').fill('Fourth electric, pictures')
+    for (const [revision, quantity] of [
+      [1, '10'],
+      [2, '6'],
+    ] as const) {
+      await row('quantity').locator('input').fill(quantity)
+      await page.locator('[data-testid=hang-save]').click()
+      await expect.poll(() => page.locator('[data-testid=hang-revision]').innerText()).toContain(`Revision ${revision}`)
+    }
+    await page.locator('[data-testid=lineset-history]').click()
+    await page.locator('[data-testid=comparison-right]').waitFor()
+    const sides = page.locator('[data-testid=comparison-left-diagram], [data-testid=comparison-right-diagram]')
+    await expect.poll(() => sides.count(), { timeout: 20_000 }).toBe(2)
+    expect(await sides.first().locator('svg').getAttribute('aria-label')).toContain('49 ft batten on 6 lift lines')
+    await sides.first().screenshot({ path: join(artifacts, 'pictures-history-diagram.png') })
   })
 
   it('when the stock page opens, then the stock chart stands beside its table', async () => {

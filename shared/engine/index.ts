@@ -15,3 +15,5 @@ export { buildBattenModel, type BattenModel, type BattenLoads } from './batten-m
 export { solveContinuousBeam, type BeamSolution } from './continuous-beam.js'
 export { formatFigure, formatQuantity } from './format.js'
 export type { Check, CheckLevel } from './checks.js'
+export { battenProfile, type BattenProfile, type BattenProfileSample } from './batten-profile.js'
+export { travelBalance, type TravelBalancePoint } from './travel-balance.js'

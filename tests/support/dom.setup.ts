@@ -1,3 +1,5 @@
+import { vi } from 'vitest'
+
 // jsdom has no layout engine; Vuetify's drawers, menus and overlays ask for these.
 class ResizeObserverStub {
   observe() {}
@@ -42,3 +44,6 @@ window.matchMedia = (query: string) =>
 
 window.scrollTo = () => {}
 Element.prototype.scrollIntoView ??= () => {}
+
+// jsdom cannot draw on a canvas: the charts render stand-ins that keep their data (tests/components/chartStandIn.ts).
+vi.mock('vue-chartjs', () => import('../components/chartStandIn'))

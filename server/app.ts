@@ -22,6 +22,7 @@ import { hangRoutes } from './modules/hangs/hang.routes.js'
 import { invitationRoutes } from './modules/invitations/invitation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
 import { outboxRoutes } from './modules/outbox/outbox.routes.js'
+import { paperworkRoutes } from './modules/paperwork/paperwork.routes.js'
 import { peopleRoutes } from './modules/people/people.routes.js'
 import { productionRoutes } from './modules/productions/production.routes.js'
 import { createPassport } from './modules/session/passport.js'
@@ -85,6 +86,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/outbox', outboxRoutes(context)],
     ['/tickets', ticketRoutes(context)],
     ['/calculations', calculationRoutes(calculations)],
+    ['', paperworkRoutes(context)],
   ] as const
   for (const [path, router] of mounts) api.use(path, router)
   api.use(apiNotFound)

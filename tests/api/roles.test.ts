@@ -255,6 +255,13 @@ const ROUTES: RouteCase[] = [
     expected: hangEditors(404),
   },
   { method: 'post', path: () => '/api/v1/calculations', body: () => calculation, expected: all(200) },
+  { method: 'get', path: () => '/api/v1/schedule.csv', expected: all(200) },
+  { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}/events.csv`, expected: all(200) },
+  {
+    method: 'get',
+    path: (f) => `/api/v1/linesets/${f.linesetId}/hangs/00000000-0000-4000-8000-000000000000/items.csv`,
+    expected: all(404),
+  },
 ]
 
 let app: TestApp

@@ -262,6 +262,8 @@ const ROUTES: RouteCase[] = [
     path: (f) => `/api/v1/linesets/${f.linesetId}/hangs/00000000-0000-4000-8000-000000000000/items.csv`,
     expected: all(404),
   },
+  { method: 'get', path: () => '/api/v1/schedule.pdf', expected: all(200) },
+  { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}/rail-card.pdf`, expected: all(200) },
 ]
 
 let app: TestApp

@@ -7,6 +7,7 @@ import { requireRole } from '../../http/auth.js'
 import { validate } from '../../http/validate.js'
 import { hangItemsCsv, ledgerCsv, scheduleCsv } from './csv-exports.service.js'
 import { sendPaper } from './download.js'
+import { railCard, schedule } from './pdf-exports.service.js'
 
 /** The venue's papers, mounted at the API's root: every role reads every one of them. */
 export function paperworkRoutes(app: AppContext) {
@@ -27,5 +28,11 @@ export function paperworkRoutes(app: AppContext) {
       sendPaper(res, await hangItemsCsv(ctx, req.params.id as string, req.params.hangId as string), 'attachment')
     },
   )
+  router.get('/schedule.pdf', requireRole(ROLES), async (req, res) => {
+    sendPaper(res, await schedule(memberContext(app, req)), 'inline')
+  })
+  router.get('/linesets/:id/rail-card.pdf', requireRole(ROLES), byId, async (req, res) => {
+    sendPaper(res, await railCard(memberContext(app, req), req.params.id as string), 'inline')
+  })
   return router
 }

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { readCsvText } from '../../shared/paperwork/csv-read.js'
+import { guessMapping, readImportRows } from '../../shared/paperwork/hang-import.js'
 import { seedVenue, type VenueFixture } from '../support/fixtures.js'
 import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
 
@@ -142,5 +143,27 @@ describe("a hang revision's items as CSV", () => {
   it("when another venue asks for a hang's items, then 404", async () => {
     expect((await metricOperator.get(itemsOf(alpha.linesetId, hangId))).status).toBe(404)
     expect((await metricOperator.get(itemsOf(beta.linesetId, hangId))).status).toBe(404)
+  })
+})
+
+describe('export then import of a hang', () => {
+  it('when the items CSV is read back and saved as the next revision, then the new revision holds the same hang', async () => {
+    const linesetId = alpha.linesetId
+    const csv = (await operator.get(`/api/v1/linesets/${linesetId}/hangs/${hangId}/items.csv`).buffer(true)).text
+    const library = (await operator.get('/api/v1/item-types').expect(200)).body
+    const { header, rows } = readCsvText(csv)
+    const read = readImportRows(header, rows, guessMapping(header, 'imperial'), {
+      units: 'imperial',
+      library,
+      defaultCategory: 'other',
+    })
+    expect(read.flatMap((row) => row.errors)).toEqual([])
+    const body = { title: 'Imported', basedOnRevision: 1, items: read.map((row) => row.entry), unitSystem: 'imperial' }
+    const saved = await operator.post(`/api/v1/linesets/${linesetId}/hangs`, body)
+    expect(saved.status, saved.text).toBe(201)
+    const before = (await operator.get(`/api/v1/linesets/${linesetId}/hangs/${hangId}`).expect(200)).body
+    const after = (await operator.get(`/api/v1/linesets/${linesetId}/hangs/${saved.body.id}`).expect(200)).body
+    expect(after.items).toEqual(before.items)
+    expect(after.totalLoad).toBe(before.totalLoad)
   })
 })

@@ -35,12 +35,22 @@ export interface ImportRow {
   unmatchedItem: string | null
 }
 
+// Other headers lists from the lighting and scenic departments often use (common practice), lower case.
+const ALSO_CALLED: Partial<Record<HangColumn, string[]>> = {
+  label: ['name', 'unit', 'unit number', 'description'],
+  item: ['fixture', 'item', 'instrument', 'type'],
+  quantity: ['qty', 'count'],
+  at: ['at', 'location'],
+  from: ['from', 'start'],
+  to: ['to', 'end'],
+}
+
 /**
  * Guesses which column is which from the header, by each column's words (an export's own headers, units
  * and all, read back exactly).
  *
  * @example
- * guessMapping(['Fixture', 'Label', 'Position (ft)'], 'imperial') // { label: 1, at: 2 }
+ * guessMapping(['Fixture', 'Label', 'Position (ft)'], 'imperial') // { label: 1, item: 0, at: 2 }
  */
 export function guessMapping(header: readonly string[], units: UnitSystem): ColumnMapping {
   const mapping: ColumnMapping = {}
@@ -51,7 +61,8 @@ export function guessMapping(header: readonly string[], units: UnitSystem): Colu
       .trim()
   for (const column of HANG_COLUMNS) {
     const exact = header.findIndex((cell) => cell.trim() === hangColumnHeader(column, units))
-    const loose = header.findIndex((cell) => simple(cell) === simple(HANG_COLUMN_LOOK[column].words))
+    const names = [simple(HANG_COLUMN_LOOK[column].words), ...(ALSO_CALLED[column] ?? [])]
+    const loose = header.findIndex((cell) => names.includes(simple(cell)))
     const index = exact >= 0 ? exact : loose
     if (index >= 0) mapping[column] = index
   }

@@ -25,6 +25,7 @@ import { hangRoutes } from './modules/hangs/hang.routes.js'
 import { invitationRoutes } from './modules/invitations/invitation.routes.js'
 import { linesetRoutes } from './modules/linesets/lineset.routes.js'
 import { outboxRoutes } from './modules/outbox/outbox.routes.js'
+import { paperworkRoutes } from './modules/paperwork/paperwork.routes.js'
 import { peopleRoutes } from './modules/people/people.routes.js'
 import { preRunCheckRoutes } from './modules/pre-run-checks/pre-run-check.routes.js'
 import { productionRoutes } from './modules/productions/production.routes.js'
@@ -96,6 +97,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
     ['/calculations', calculationRoutes(calculations)],
     ['/board', boardRoutes(context, liveHub, config.boardKeepAliveMs)],
     ['/pre-run-checks', preRunCheckRoutes(context)],
+    ['', paperworkRoutes(context)],
   ] as const
   for (const [path, router] of mounts) api.use(path, router)
   api.use(apiNotFound)

@@ -1,20 +1,9 @@
-import type { LinesetKind, LinesetStatus } from '../../shared/schemas/index.js'
+import type { LinesetStatus } from '../../shared/schemas/index.js'
+import { LINESET_KIND_WORDS, LINESET_STATUS_WORDS } from '../../shared/schemas/lineset-words.js'
 
-/** Plain names for each kind of lineset, as the screens show them. */
-export const KIND_LABELS: Readonly<Record<LinesetKind, string>> = {
-  'counterweight-single': 'Counterweight, single purchase',
-  'counterweight-double': 'Counterweight, double purchase',
-  'hemp-single': 'Hemp, one line',
-  'hemp-multi': 'Hemp, several lines',
-  'spot-line': 'Spot line',
-  motorized: 'Motorized',
-}
-
-export const STATUS_LABELS: Readonly<Record<LinesetStatus, string>> = {
-  'in-service': 'In service',
-  'needs-inspection': 'Due for inspection',
-  'out-of-service': 'Out of service',
-}
+/** Plain names for each kind of lineset and each status (shared with the printed papers). */
+export const KIND_LABELS = LINESET_KIND_WORDS
+export const STATUS_LABELS = LINESET_STATUS_WORDS
 
 /** Theme colours for the status chip; the words carry the meaning, the colour only helps. */
 export const STATUS_COLORS: Readonly<Record<LinesetStatus, string>> = {

@@ -285,6 +285,15 @@ const ROUTES: RouteCase[] = [
     body: (_f, role) => ({ note: `Roles ${role}` }),
     expected: preRunCheckers(201),
   },
+  { method: 'get', path: () => '/api/v1/schedule.csv', expected: all(200) },
+  { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}/events.csv`, expected: all(200) },
+  {
+    method: 'get',
+    path: (f) => `/api/v1/linesets/${f.linesetId}/hangs/00000000-0000-4000-8000-000000000000/items.csv`,
+    expected: all(404),
+  },
+  { method: 'get', path: () => '/api/v1/schedule.pdf', expected: all(200) },
+  { method: 'get', path: (f) => `/api/v1/linesets/${f.linesetId}/rail-card.pdf`, expected: all(200) },
 ]
 
 /**

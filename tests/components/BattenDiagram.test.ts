@@ -67,6 +67,11 @@ describe('BattenDiagram', () => {
     expect(wrapper.get('[data-testid="diagram-dangers"]').text()).toContain('Line 3 is slack')
     expect(wrapper.get('svg').attributes('aria-label')).toContain('(slack)')
     expect(wrapper.get('[data-testid="diagram-line-0"]').classes()).not.toContain('batten-diagram--danger')
+    // The engine's own tension-only loads are drawn without being passed separately.
+    const middle = lifted.result.tensionOnly!.lineLoads[1]!.load
+    expect(wrapper.get('[data-testid="diagram-line-1"]').text()).toContain(
+      `${middle.toLocaleString('en-US', { maximumFractionDigits: 2 })} lb`,
+    )
   })
 
   it('when the tension-only figures name a slack line, then that line is drawn slack with their load', () => {

@@ -1,9 +1,8 @@
-import '@mdi/font/css/materialdesignicons.css'
-import '@fontsource/roboto/400.css'
-import '@fontsource/roboto/500.css'
-import '@fontsource/roboto/700.css'
+import '../styles/roboto.css'
 import 'vuetify/styles'
 import { createVuetify } from 'vuetify'
+import { aliases } from 'vuetify/iconsets/mdi-svg'
+import { pathIcons } from './icons/pathIcons'
 
 /** Loftledger's own light palette: deep slate for structure, brass for actions that matter. */
 export const loftledgerTheme = {
@@ -22,6 +21,8 @@ export const loftledgerTheme = {
 }
 
 export default createVuetify({
+  // Vuetify's own icons ($close, $dropdown, ...) come as SVG paths; the views' `mdi-...` names go through the map.
+  icons: { defaultSet: 'paths', aliases, sets: { paths: pathIcons } },
   theme: { defaultTheme: 'loftledger', themes: { loftledger: loftledgerTheme } },
   defaults: {
     VTextField: { variant: 'outlined', density: 'comfortable' },

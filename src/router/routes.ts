@@ -1,5 +1,7 @@
 import type { RouteRecordRaw } from 'vue-router'
-import { INVENTORY_EDITORS, OUTBOX_READERS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/index.js'
+// The shell imports single schema files, not the index: the index would load every schema before sign-in.
+import { INVENTORY_EDITORS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/role.js'
+import { OUTBOX_READERS } from '../../shared/schemas/outbox.js'
 
 declare module 'vue-router' {
   interface RouteMeta {

@@ -95,8 +95,9 @@ export async function timeToInteractive(browser: Browser, url: string, slowdown:
     await cdp.send('Emulation.setCPUThrottlingRate', { rate: slowdown })
     await page.addInitScript({ content: NOTE_READY })
     await page.goto(url)
-    await page.waitForFunction('window.readyAt !== undefined')
-    return (await page.evaluate('window.readyAt')) as number
+    // Functions, not strings: the app's Content-Security-Policy forbids eval in the page.
+    await page.waitForFunction(() => (globalThis as { readyAt?: number }).readyAt !== undefined)
+    return await page.evaluate(() => (globalThis as { readyAt?: number }).readyAt!)
   } finally {
     await context.close()
   }

@@ -24,3 +24,6 @@ export const PRODUCTION_MANAGERS: readonly Role[] = ['administrator', 'technical
 
 export const canEditHangs = (role: Role | undefined) => !!role && HANG_EDITORS.includes(role)
 export const canManageProductions = (role: Role | undefined) => !!role && PRODUCTION_MANAGERS.includes(role)
+
+/** Who may read the venue's outgoing mail: it holds invitation links and everyone's addresses. */
+export const OUTBOX_READERS: readonly Role[] = ['administrator']

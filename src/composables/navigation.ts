@@ -1,5 +1,4 @@
-import { INVENTORY_EDITORS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/role.js'
-import { OUTBOX_READERS } from '../../shared/schemas/outbox.js'
+import { INVENTORY_EDITORS, OUTBOX_READERS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/role.js'
 
 export interface NavigationEntry {
   title: string

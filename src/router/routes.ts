@@ -1,7 +1,6 @@
 import type { RouteRecordRaw } from 'vue-router'
 // The shell imports single schema files, not the index: the index would load every schema before sign-in.
-import { INVENTORY_EDITORS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/role.js'
-import { OUTBOX_READERS } from '../../shared/schemas/outbox.js'
+import { INVENTORY_EDITORS, OUTBOX_READERS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/role.js'
 
 declare module 'vue-router' {
   interface RouteMeta {

@@ -1,6 +1,5 @@
 import type { Role } from '../../shared/schemas/role.js'
-import { INVENTORY_EDITORS, PEOPLE_MANAGERS, ROLES } from '../../shared/schemas/role.js'
-import { OUTBOX_READERS } from '../../shared/schemas/outbox.js'
+import { INVENTORY_EDITORS, OUTBOX_READERS, PEOPLE_MANAGERS, ROLES } from '../../shared/schemas/role.js'
 
 /** Records a screen's path needs, read from the demo venue once per run. */
 export interface DemoIds {

@@ -2,13 +2,17 @@ import { fileURLToPath, URL } from 'node:url'
 import { defineConfig } from 'vitest/config'
 import vue from '@vitejs/plugin-vue'
 import vuetify from 'vite-plugin-vuetify'
+import { precompress } from './scripts/lib/precompress.js'
 
 const clientPlugins = () => [vue(), vuetify({ autoImport: true })]
 const alias = { '@': fileURLToPath(new URL('./src', import.meta.url)) }
 
 export default defineConfig({
-  plugins: clientPlugins(),
+  plugins: [...clientPlugins(), precompress()],
   resolve: { alias },
+  // Every component is written with <script setup> (Vuetify's, the router's and Pinia's too), so Vue's options
+  // API is left out of the bundle.
+  define: { __VUE_OPTIONS_API__: 'false' },
   build: {
     outDir: 'dist',
     emptyOutDir: true,

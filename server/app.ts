@@ -1,11 +1,12 @@
-import { existsSync } from 'node:fs'
-import { join, resolve } from 'node:path'
+import { resolve } from 'node:path'
+import compression from 'compression'
 import express from 'express'
 import { buildAppContext, type AppOverrides } from './app-context.js'
 import type { Config } from './config.js'
 import type { AppContext } from './context.js'
 import { connectDatabase } from './db/connection.js'
 import { defineModels, type Database } from './db/models.js'
+import { clientAssets, hasBuiltClient } from './http/client-assets.js'
 import { csrfProtection } from './http/csrf.js'
 import { apiNotFound, errorHandler } from './http/errors.js'
 import { noStore, securityHeaders } from './http/headers.js'
@@ -101,15 +102,14 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
   ] as const
   for (const [path, router] of mounts) api.use(path, router)
   api.use(apiNotFound)
+  // Lists run to tens of kilobytes of JSON. Answers under 1 KB (the session's, which carries the CSRF token)
+  // stay plain, so no secret is ever compressed beside text a page can make the API echo.
+  app.use('/api', compression({ threshold: 1024 }))
   app.use('/api', noStore)
   app.use('/api/v1', api)
   app.use('/api', apiNotFound)
 
-  if (config.clientDir && existsSync(join(config.clientDir, 'index.html'))) {
-    const clientDir = resolve(config.clientDir)
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
-    app.get('/{*splat}', (_req, res) => res.sendFile(join(clientDir, 'index.html')))
-  }
+  if (config.clientDir && hasBuiltClient(config.clientDir)) app.use(clientAssets(resolve(config.clientDir)))
   app.use(errorHandler(log))
 
   return {

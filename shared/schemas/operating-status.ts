@@ -24,7 +24,7 @@ export const OPERATING_STATUS_LOOK: Readonly<Record<OperatingStatus, { label: st
     loading: { label: 'Loading, do not operate', icon: 'mdi-weight', color: 'warning' },
     'out-of-balance': { label: 'Out of balance, do not operate', icon: 'mdi-scale-unbalanced', color: 'error' },
     'locked-out': { label: 'Locked out', icon: 'mdi-lock-outline', color: 'error' },
-    'out-of-service': { label: 'Out of service', icon: 'mdi-cancel', color: 'grey' },
+    'out-of-service': { label: 'Out of service', icon: 'mdi-cancel', color: 'secondary' },
   }
 
 /** How the set felt at the rail when weight last moved. */

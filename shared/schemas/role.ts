@@ -29,3 +29,5 @@ export const canManageProductions = (role: Role | undefined) => !!role && PRODUC
 export const PRE_RUN_CHECKERS: readonly Role[] = ['administrator', 'technical-director', 'stage-manager']
 
 export const canRecordPreRunCheck = (role: Role | undefined) => !!role && PRE_RUN_CHECKERS.includes(role)
+/** Who may read the venue's outgoing mail: it holds invitation links and everyone's addresses. */
+export const OUTBOX_READERS: readonly Role[] = ['administrator']

@@ -109,7 +109,7 @@ export const TICKET_STATE_LOOK: Readonly<Record<TicketState, { label: string; ic
   requested: { label: 'Awaiting a decision', icon: 'mdi-clock-outline', color: 'info' },
   approved: { label: 'Approved, ready to load', icon: 'mdi-check', color: 'success' },
   declined: { label: 'Declined', icon: 'mdi-close-circle-outline', color: 'error' },
-  withdrawn: { label: 'Withdrawn', icon: 'mdi-undo', color: 'grey' },
+  withdrawn: { label: 'Withdrawn', icon: 'mdi-undo', color: 'secondary' },
   loading: { label: 'Loading, do not operate', icon: 'mdi-weight', color: 'warning' },
   loaded: { label: 'Loaded', icon: 'mdi-check-all', color: 'success' },
 }

@@ -1,5 +1,4 @@
-import type { Role } from '../../shared/schemas/index.js'
-import { INVENTORY_EDITORS, OUTBOX_READERS, PEOPLE_MANAGERS, ROLES } from '../../shared/schemas/index.js'
+import { INVENTORY_EDITORS, OUTBOX_READERS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/role.js'
 
 export interface NavigationEntry {
   title: string

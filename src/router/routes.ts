@@ -1,5 +1,6 @@
 import type { RouteRecordRaw } from 'vue-router'
-import { INVENTORY_EDITORS, OUTBOX_READERS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/index.js'
+// The shell imports single schema files, not the index: the index would load every schema before sign-in.
+import { INVENTORY_EDITORS, OUTBOX_READERS, PEOPLE_MANAGERS, ROLES, type Role } from '../../shared/schemas/role.js'
 
 declare module 'vue-router' {
   interface RouteMeta {

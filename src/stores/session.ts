@@ -1,6 +1,7 @@
 import { defineStore } from 'pinia'
 import { computed, ref } from 'vue'
-import { canEditInventory, canManagePeople, type SessionUser, type SignIn } from '../../shared/schemas/index.js'
+import { canEditInventory, canManagePeople } from '../../shared/schemas/role.js'
+import type { SessionUser, SignIn } from '../../shared/schemas/session.js'
 import { hasCsrfToken, setCsrfToken } from '../api/client'
 import { sessionApi } from '../api/session'
 

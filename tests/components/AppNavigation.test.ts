@@ -62,3 +62,16 @@ describe('AppNavigation', () => {
     ])
   })
 })
+
+describe('AppNavigation for keyboards and screen readers', () => {
+  it('when the menu shows, then its entries are links each reached with Tab, in no list role that forbids links', async () => {
+    await navigationFor('administrator')
+    const links = wrapper!.findAll('[data-testid^="nav-"]')
+    for (const link of links) {
+      expect(link.element.tagName).toBe('A')
+      expect(link.attributes('tabindex')).toBe('0')
+      expect(link.element.parentElement?.getAttribute('role')).not.toMatch(/^(list|listbox)$/)
+    }
+    expect(wrapper!.get('[data-testid=app-navigation]').attributes('aria-label')).toBe('Main menu')
+  })
+})

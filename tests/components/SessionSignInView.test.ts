@@ -25,6 +25,8 @@ async function openSignIn(redirect?: string) {
   const router = testRouter()
   await router.push({ name: 'session-sign-in', query: redirect ? { redirect } : {} })
   wrapper = mountWithApp(SessionSignInView, { global: { plugins: [pinia, router] } })
+  // The page fetches its form schema after it appears; a person takes longer to type than that takes.
+  await import('../../shared/schemas/session.js')
   return { w: wrapper, router }
 }
 

@@ -27,6 +27,12 @@ export const SCREENS: readonly Screen[] = [
     path: () => '/invitation/no-such-token',
     ready: '[data-testid=invitation-unusable]',
   },
+  {
+    name: 'board',
+    path: () => '/board',
+    ready: '[data-testid=board-linesets], [data-testid=board-empty]',
+    roles: ROLES,
+  },
   { name: 'linesets list', path: () => '/linesets', ready: '[data-testid^=linesets-row-]', roles: ROLES },
   {
     name: 'lineset page',

@@ -1,6 +1,17 @@
 // The one map from the icon names the views use (`mdi-...`) to SVG paths: only these paths are bundled.
 // tests/unit/icon-map.test.ts fails when a name used in src/ or shared/ is missing here.
 import {
+  mdiHanger,
+  mdiAccessPoint,
+  mdiAccessPointOff,
+  mdiFileDelimitedOutline,
+  mdiPaperclip,
+  mdiUpload,
+  mdiFilePdfBox,
+  mdiDownload,
+  mdiViewDashboardOutline,
+  mdiCardTextOutline,
+  mdiFileImportOutline,
   mdiAccountCircleOutline,
   mdiAccountGroupOutline,
   mdiAccountPlusOutline,
@@ -67,6 +78,17 @@ import {
 
 /** SVG path data by icon name. */
 export const ICON_PATHS: Readonly<Record<string, string>> = {
+  'mdi-hanger': mdiHanger,
+  'mdi-access-point': mdiAccessPoint,
+  'mdi-access-point-off': mdiAccessPointOff,
+  'mdi-file-delimited-outline': mdiFileDelimitedOutline,
+  'mdi-paperclip': mdiPaperclip,
+  'mdi-upload': mdiUpload,
+  'mdi-file-pdf-box': mdiFilePdfBox,
+  'mdi-download': mdiDownload,
+  'mdi-view-dashboard-outline': mdiViewDashboardOutline,
+  'mdi-card-text-outline': mdiCardTextOutline,
+  'mdi-file-import-outline': mdiFileImportOutline,
   'mdi-account-circle-outline': mdiAccountCircleOutline,
   'mdi-account-group-outline': mdiAccountGroupOutline,
   'mdi-account-plus-outline': mdiAccountPlusOutline,

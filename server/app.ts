@@ -1,5 +1,6 @@
 import { resolve } from 'node:path'
 import compression from 'compression'
+import type { Request, Response } from 'express'
 import express from 'express'
 import { buildAppContext, type AppOverrides } from './app-context.js'
 import type { Config } from './config.js'
@@ -104,7 +105,9 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
   api.use(apiNotFound)
   // Lists run to tens of kilobytes of JSON. Answers under 1 KB (the session's, which carries the CSRF token)
   // stay plain, so no secret is ever compressed beside text a page can make the API echo.
-  app.use('/api', compression({ threshold: 1024 }))
+  // The board's event stream is never compressed: compression holds bytes back until a buffer fills, and an
+  // event must reach the board the moment it is written.
+  app.use('/api', compression({ threshold: 1024, filter: compressibleAnswer }))
   app.use('/api', noStore)
   app.use('/api/v1', api)
   app.use('/api', apiNotFound)
@@ -128,4 +131,9 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
       await connections.close()
     },
   }
+}
+
+function compressibleAnswer(req: Request, res: Response): boolean {
+  const type = String(res.getHeader('Content-Type') ?? '')
+  return !type.startsWith('text/event-stream') && compression.filter(req, res)
 }

@@ -44,6 +44,9 @@ describe('attaching a photo to a lineset', () => {
 
     const reader = await suite.newPage()
     await signInOnPage(reader, suite.app.url, 'sm@demo.test')
+    // The stage manager lands on the board; the lineset is reached from the list.
+    await reader.locator('[data-testid=board-linesets]').waitFor()
+    await reader.goto(`${suite.app.url}/linesets`)
     await reader.locator('[data-testid=linesets-row-3]').click()
     const readOnly = reader.locator('[data-testid=attachments-panel]')
     await readOnly.locator('[data-testid^=attachment-download-]').first().waitFor()

@@ -60,7 +60,7 @@ export function analyseBatten(input: CalculationInput): BattenAnalysis {
   const { battenWeight, hardwareWeight } = loads
   const totalLoad = battenWeight.plus(hardwareWeight).plus(rigidModel.itemsWeight)
   const slack = rigid.reactions.length >= 2 && totalLoad.gt(0) && rigid.reactions.some((load) => load.lte(0))
-  const tension = slack ? solveTensionOnly(loads.beam, rigid.reactions) : undefined
+  const tension = slack ? solveTensionOnly(loads.beam, rigid.reactions, rigidModel) : undefined
   // The batten's bending follows the lines that actually hold; a tipping batten has no such state, so keep the rigid one.
   const { model, solution } = tension?.held ?? { model: rigidModel, solution: rigid }
   const analysis: BattenAnalysis = {

@@ -3,6 +3,8 @@ import type { Decimal } from 'decimal.js'
 import { buildBattenModel, type BattenLoads, type BattenModel } from './batten-model.js'
 import { battenDropAt } from './batten-drop.js'
 import { solveContinuousBeam, type BeamSolution } from './continuous-beam.js'
+import { chooseHeldLines, floatBatten } from './held-lines-float.js'
+import { floatOf } from './decimal-float.js'
 
 /** The batten on tension-only lines: a load per line (zero where slack), and whether it hangs level. */
 export interface TensionOnlySolution {
@@ -37,7 +39,11 @@ const ZERO = Dec(0)
  * // lines at 0, 10, 20 with 320 at 5: the line at 20 goes slack and the others carry 160 each
  * solveTensionOnly(loads, [Dec(130), Dec(220), Dec(-30)]).loads.map(String) // ['160', '160', '0']
  */
-export function solveTensionOnly(loads: BattenLoads, rigid: readonly Decimal[]): TensionOnlySolution {
+export function solveTensionOnly(
+  loads: BattenLoads,
+  rigid: readonly Decimal[],
+  rigidModel?: BattenModel,
+): TensionOnlySolution {
   const n = rigid.length
   const total = rigid.reduce((sum, load) => sum.plus(load), ZERO)
   const span = Dec(loads.length).abs().plus(1)
@@ -53,6 +59,16 @@ export function solveTensionOnly(loads: BattenLoads, rigid: readonly Decimal[]):
     return { beam, full }
   }
   const feasible = (loadsNow: Decimal[], held: number[]) => held.every((k) => !loadsNow[k]!.lt(loadNoise.neg()))
+  // The same search in floats on the rigid model's regions usually names the holding lines; one exact solve on
+  // them is kept only when it meets this search's own end condition below (every load above the noise, no
+  // released line sinking), so the answer is the one the exact search settles on.
+  const guess = rigidModel && chooseHeldLines(floatBatten(rigidModel), rigid.map(floatOf))
+  if (guess) {
+    const exact = solve(guess)
+    const holds = guess.every((k) => exact.full[k]!.gt(loadNoise))
+    if (holds && mostSinking(exact.beam, loads.pickPoints, guess, dropNoise) === undefined)
+      return settled(exact.full, exact.beam, solves)
+  }
   // Warm start: release the lines that push, again on the beam that is left, until none does (each pass drops a
   // line, so at most n passes); else the two end lines, which balance any load whose centre lies between them.
   let held = rigid.flatMap((load, k) => (load.gt(0) ? [k] : []))

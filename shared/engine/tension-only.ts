@@ -3,6 +3,7 @@ import type { Decimal } from 'decimal.js'
 import { buildBattenModel, type BattenLoads, type BattenModel } from './batten-model.js'
 import { battenDropAt } from './batten-drop.js'
 import { solveContinuousBeam, type BeamSolution } from './continuous-beam.js'
+import { heldModel } from './held-model.js'
 import { chooseHeldLines, floatBatten } from './held-lines-float.js'
 import { floatOf } from './decimal-float.js'
 
@@ -53,7 +54,7 @@ export function solveTensionOnly(
   let solves = 0
   const solve = (held: number[]) => {
     solves++
-    const beam = heldBeam(loads, held)
+    const beam = heldBeam(loads, held, rigidModel)
     const full = new Array<Decimal>(n).fill(ZERO)
     beam.solution.reactions.forEach((load, k) => (full[held[k]!] = load))
     return { beam, full }
@@ -115,7 +116,11 @@ export function solveTensionOnly(
 }
 
 /** The beam on the given lines only; hardware at a released line still hangs on the batten there. */
-function heldBeam(loads: BattenLoads, held: number[]) {
+function heldBeam(loads: BattenLoads, held: number[], rigidModel?: BattenModel) {
+  if (rigidModel) {
+    const model = heldModel(loads, held, rigidModel)
+    return { model, solution: solveContinuousBeam(model) }
+  }
   const isHeld = new Set(held)
   const released = loads.pickPoints.filter((_, k) => !isHeld.has(k))
   const hardware = loads.atEachLine === undefined ? [] : released.map((at) => ({ at, weight: loads.atEachLine! }))

@@ -21,7 +21,9 @@ const file = (name: string, text: string) => {
   return path
 }
 
-describe('calc CLI', () => {
+// Each case starts Node with tsx (twice in one case), which on a busy machine takes seconds: the process's own
+// 30 s limit, not vitest's 5 s default, is what bounds a case.
+describe('calc CLI', { timeout: 70_000 }, () => {
   it('when given a valid file, then it prints the result JSON and exits 0', () => {
     const run = calc([file('valid.json', JSON.stringify(SAMPLE_INPUT))])
     expect(run.status).toBe(0)

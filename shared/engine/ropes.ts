@@ -14,7 +14,7 @@ export interface RopeSize {
  * (about 0.4·d² in² for a 7x19 strand rope) times a rope modulus of about 12,000 ksi, both from memory.
  */
 export const ROPE_STIFFNESS_BASIS =
-  'rope table: metallic area ≈ 0.4·d² × rope modulus ≈ 12,000 ksi (from memory, unverified)'
+  'rope table: metallic area about 0.4·d² times a rope modulus of about 12,000 ksi (from memory, unverified)'
 
 /** The basis named when the lineset gives its own EA. */
 export const ENTERED_STIFFNESS_BASIS = 'rope stiffness (EA) as entered for the lineset'

@@ -30,7 +30,7 @@ export function calculate(input: CalculationInput): CalculationResult {
       : workingLoadLimit(input.liftLine.breakingStrength, input.liftLine.designFactor)
   const checks: Check[] = [
     ...slackChecks(analysis, batten.pickPoints, units, limit),
-    ...stretchChecks(analysis, batten.pickPoints, units),
+    ...stretchChecks(analysis, batten.pickPoints, units, limit),
     ...lineChecks(analysis.lineLoads, batten.pickPoints, units, input.liftLine, tensionOnly),
     ...ratedLoadChecks(analysis.totalLoad, input.ratedLoad, units),
     ...battenChecks(analysis, input.kind, batten.pickPoints, units),
@@ -87,10 +87,12 @@ export function calculate(input: CalculationInput): CalculationResult {
       overhangs: analysis.deflection.overhangs.map((o) => ({ end: o.end, length: r(o.length), tip: r(o.tip) })),
     }
   }
-  // A block, like a line, must take the larger of the two loads it may see.
-  const heavier = analysis.lineLoads.map((load, k) =>
-    tensionOnly?.stable ? Dec.max(load, tensionOnly.lineLoads[k]!) : load,
-  )
+  // A block, like a line, must take the largest of the loads it may see (rigid, once slack, with stretch).
+  const stretched = elastic && !('reason' in elastic) ? elastic.loads : undefined
+  const heavier = analysis.lineLoads.map((load, k) => {
+    const slackOrRigid = tensionOnly?.stable ? Dec.max(load, tensionOnly.lineLoads[k]!) : load
+    return stretched ? Dec.max(slackOrRigid, stretched[k]!) : slackOrRigid
+  })
   const tips = tensionOnly?.stable === false
   Object.assign(result, kindFigures(input, { totalLoad: analysis.totalLoad, lineLoads: heavier, tips }, checks))
   result.checks = sortChecks(checks)

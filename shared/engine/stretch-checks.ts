@@ -40,6 +40,7 @@ export function stretchChecks(
   analysis: Pick<BattenAnalysis, 'lineLoads' | 'tensionOnly' | 'elastic'>,
   positions: readonly number[],
   units: UnitSystem,
+  limit?: Decimal,
 ): Check[] {
   const elastic = analysis.elastic
   if (!elastic) return []
@@ -51,10 +52,18 @@ export function stretchChecks(
         `Lift line lengths are given, but the loads with stretching lines are not worked out: ${elastic.reason}`,
       ),
     ]
-  const shifted = shiftedLines(elastic, crewLoads(analysis))
-  if (shifted.length === 0) return []
   const weight = (value: Decimal.Value) => formatQuantity(value, 'weight', units)
   const at = (k: number) => formatQuantity(positions[k]!, 'length', units)
+  const over = limit ? overLimitOnlyWhenStretching(analysis, elastic, limit) : []
+  const overChecks = over.map((k) =>
+    check(
+      'line-over-limit',
+      'danger',
+      `Lift line at ${at(k)} carries ${weight(elastic.loads[k]!)} with the lines stretching, above its working load limit of ${weight(limit!)}`,
+    ),
+  )
+  const shifted = shiftedLines(elastic, crewLoads(analysis))
+  if (shifted.length === 0) return overChecks
   const words = shifted.map(({ k, rigid, percent }) => {
     const sign = percent.gt(0) ? '+' : ''
     return `the line at ${at(k)} carries ${weight(elastic.loads[k]!)} rather than ${weight(rigid)} (${sign}${formatFigure(percent)} %)`
@@ -64,6 +73,7 @@ export function stretchChecks(
     ? ` With stretch the line${pushing.length > 1 ? 's' : ''} at ${pushing.map(({ k }) => at(k)).join(', ')} would go slack.`
     : ''
   return [
+    ...overChecks,
     check(
       'line-stretch-shifts-load',
       'caution',
@@ -77,4 +87,17 @@ function shiftedLines(elastic: ElasticLines, rigid: readonly Decimal[]) {
   return stretchDifferences(elastic.loads, rigid).flatMap((percent, k) =>
     percent !== undefined && percent.abs().gt(limit) ? [{ k, rigid: rigid[k]!, percent }] : [],
   )
+}
+
+/** Lines above the limit only with stretch: the rigid and slack-line figures are checked by `lineChecks`. */
+function overLimitOnlyWhenStretching(
+  analysis: Pick<BattenAnalysis, 'lineLoads' | 'tensionOnly'>,
+  elastic: ElasticLines,
+  limit: Decimal,
+): number[] {
+  const slackLoads = analysis.tensionOnly?.stable ? analysis.tensionOnly.lineLoads : undefined
+  return elastic.loads.flatMap((load, k) => {
+    const checked = slackLoads ? Dec.max(analysis.lineLoads[k]!, slackLoads[k]!) : analysis.lineLoads[k]!
+    return load.gt(limit) && !checked.gt(limit) ? [k] : []
+  })
 }

@@ -98,6 +98,22 @@ describe('the loads with stretching lines in a calculation', () => {
     expect(result.elasticLines!.largestDifference).toBeGreaterThan(10)
   })
 
+  it("when only the stretching figure passes a line's limit, then a danger names that line and that figure", () => {
+    // Limit 1,200 / 8 = 150 lb: the end line at 0 ft carries 108.9 lb as a rigid line, about 207 lb with soft lines.
+    const liftLine = {
+      lengths: [100, 100, 100, 100, 100],
+      axialStiffness: 1000,
+      breakingStrength: 1200,
+      designFactor: 8,
+    }
+    const result = run({ ...EVEN, liftLine })
+    const over = result.checks.filter((c) => c.code === 'line-over-limit').map((c) => c.message)
+    expect(over).toContain(
+      `Lift line at 0 ft carries ${result.elasticLines!.lineLoads[0]!.load} lb with the lines stretching, above its working load limit of 150 lb`,
+    )
+    expect(over.filter((m) => m.startsWith('Lift line at 10 ft'))).toHaveLength(1)
+  })
+
   it('when a line is slack, then the stretching lines are solved on the lines that hold and the slack one stays at 0', () => {
     const result = run({
       ...SAMPLE_INPUT,

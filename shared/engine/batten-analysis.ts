@@ -8,6 +8,7 @@ import { battenDeflections } from './deflection.js'
 import { resolvePipe, type PipeProperties } from './pipe-properties.js'
 import { bendingStress, deflectionConverter } from './structural-units.js'
 import { solveTensionOnly } from './tension-only.js'
+import { elasticLines, type ElasticLines, type ElasticUnavailable } from './elastic-lines.js'
 
 /**
  * Allowable bending stress 0.66·Fy: the allowable-stress-design value for compact sections, common
@@ -29,6 +30,11 @@ export interface BattenAnalysis {
    * solution's whenever it is stable.
    */
   tensionOnly?: { lineLoads: Decimal[]; slackLines: number[]; stable: boolean }
+  /**
+   * Present when the lineset gives its lines' lengths: the loads with lines that stretch (on the lines that hold),
+   * or why they could not be worked out.
+   */
+  elastic?: ElasticLines | ElasticUnavailable
   peak: PeakMoment
   /** One line only: moment of all loads about it (zero when the load hangs at the point). */
   unbalancedMoment: Decimal
@@ -73,6 +79,11 @@ export function analyseBatten(input: CalculationInput): BattenAnalysis {
     unbalancedMoment: rigid.unbalancedMoment,
   }
   if (tension) analysis.tensionOnly = { lineLoads: tension.loads, slackLines: tension.slack, stable: tension.stable }
+  const slackLines = new Set(tension?.slack ?? [])
+  const heldLines = batten.pickPoints.flatMap((_, k) => (slackLines.has(k) ? [] : [k]))
+  const held = tension && !tension.stable ? undefined : { model, solution }
+  const elastic = elasticLines(input.liftLine, held, heldLines, pipe, units)
+  if (elastic) analysis.elastic = elastic
   if (!pipe) return analysis
   analysis.pipe = pipe
   analysis.bending = {

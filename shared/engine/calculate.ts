@@ -9,6 +9,7 @@ import { sortChecks, type Check } from './checks.js'
 import { FIGURES_DISCLAIMER } from './cautions.js'
 import { kindFigures } from './kind-figures.js'
 import { slackChecks } from './slack-checks.js'
+import { crewLoads, stretchChecks, stretchDifferences } from './stretch-checks.js'
 
 const r = (value: Decimal.Value) => roundTo(value, 2)
 
@@ -29,6 +30,7 @@ export function calculate(input: CalculationInput): CalculationResult {
       : workingLoadLimit(input.liftLine.breakingStrength, input.liftLine.designFactor)
   const checks: Check[] = [
     ...slackChecks(analysis, batten.pickPoints, units, limit),
+    ...stretchChecks(analysis, batten.pickPoints, units, limit),
     ...lineChecks(analysis.lineLoads, batten.pickPoints, units, input.liftLine, tensionOnly),
     ...ratedLoadChecks(analysis.totalLoad, input.ratedLoad, units),
     ...battenChecks(analysis, input.kind, batten.pickPoints, units),
@@ -58,6 +60,17 @@ export function calculate(input: CalculationInput): CalculationResult {
       slackLines: tensionOnly.slackLines,
       stable: tensionOnly.stable,
     }
+  const { elastic } = analysis
+  if (elastic && !('reason' in elastic)) {
+    const differences = stretchDifferences(elastic.loads, crewLoads(analysis))
+    const largest = differences.reduce<Decimal>((most, d) => (d && d.abs().gt(most) ? d.abs() : most), Dec(0))
+    result.elasticLines = {
+      lineLoads: elastic.loads.map((load, k) => ({ at: batten.pickPoints[k]!, load: r(load) })),
+      stiffness: elastic.stiffness.map((k, line) => ({ at: batten.pickPoints[line]!, stiffness: r(k) })),
+      largestDifference: r(largest),
+      basis: elastic.basis,
+    }
+  }
   if (limit) result.lineWorkingLoadLimit = r(limit)
   if (analysis.bending) {
     const { stress, allowable } = analysis.bending
@@ -74,10 +87,12 @@ export function calculate(input: CalculationInput): CalculationResult {
       overhangs: analysis.deflection.overhangs.map((o) => ({ end: o.end, length: r(o.length), tip: r(o.tip) })),
     }
   }
-  // A block, like a line, must take the larger of the two loads it may see.
-  const heavier = analysis.lineLoads.map((load, k) =>
-    tensionOnly?.stable ? Dec.max(load, tensionOnly.lineLoads[k]!) : load,
-  )
+  // A block, like a line, must take the largest of the loads it may see (rigid, once slack, with stretch).
+  const stretched = elastic && !('reason' in elastic) ? elastic.loads : undefined
+  const heavier = analysis.lineLoads.map((load, k) => {
+    const slackOrRigid = tensionOnly?.stable ? Dec.max(load, tensionOnly.lineLoads[k]!) : load
+    return stretched ? Dec.max(slackOrRigid, stretched[k]!) : slackOrRigid
+  })
   const tips = tensionOnly?.stable === false
   Object.assign(result, kindFigures(input, { totalLoad: analysis.totalLoad, lineLoads: heavier, tips }, checks))
   result.checks = sortChecks(checks)

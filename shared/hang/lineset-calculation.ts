@@ -50,6 +50,12 @@ export function linesetCalculationInput(options: {
       designFactor: venue.wireRopeDesignFactor,
       ...(present(lineset.liftLineWeightPerLength) ? { weightPerLength: lineset.liftLineWeightPerLength } : {}),
       ...(present(lineset.liftLineBreakingStrength) ? { breakingStrength: lineset.liftLineBreakingStrength } : {}),
+      // Lengths only count when there is one per line; then the rope's stiffness says how far each stretches.
+      ...(lineset.liftLineLengths?.length === lineset.pickPoints.length
+        ? { lengths: [...lineset.liftLineLengths] }
+        : {}),
+      ...(present(lineset.liftLineRope) ? { rope: lineset.liftLineRope } : {}),
+      ...(present(lineset.liftLineAxialStiffness) ? { axialStiffness: lineset.liftLineAxialStiffness } : {}),
     },
   }
   if (present(lineset.ratedLoad)) input.ratedLoad = lineset.ratedLoad

@@ -30,6 +30,20 @@ export interface TensionOnlyResult {
   stable: boolean
 }
 
+/**
+ * The loads when the lift lines stretch (each a spring EA / length), on the lines that hold: present when the
+ * lineset gives its lines' lengths and a rope stiffness, and the batten's stiffness is known.
+ */
+export interface ElasticLinesResult {
+  lineLoads: LineLoad[]
+  /** Each line's stiffness EA / length, in weight per `unitLabels.length`. */
+  stiffness: Array<{ at: number; stiffness: number }>
+  /** Largest difference from the rigid figure the crew reads (tension-only when a line is slack), in %. */
+  largestDifference: number
+  /** Where the stiffness figures come from. */
+  basis: string
+}
+
 /** Unit labels for every figure in a result. */
 export interface ResultUnitLabels {
   weight: string
@@ -77,6 +91,8 @@ export interface CalculationResult {
   lineLoads: LineLoad[]
   /** Present whenever a rigid line load is zero or below; moment, stress and deflection then follow it when stable. */
   tensionOnly?: TensionOnlyResult
+  /** Present when the lines' lengths and stiffness are given: the loads with lines that stretch. */
+  elasticLines?: ElasticLinesResult
   /** Working load limit of one lift line (breaking strength / design factor), when given. */
   lineWorkingLoadLimit?: number
   /** Largest bending moment along the batten; negative is hogging (over a line), positive sagging. */

@@ -8,6 +8,7 @@ interface RuleInput {
   items: Array<{ weight?: number; at?: number; weightPerLength?: number; from?: number; to?: number }>
   arbor?: object
   hoist?: object
+  liftLine?: { lengths?: number[] }
 }
 
 type Context = z.core.$RefinementCtx<RuleInput>
@@ -73,4 +74,7 @@ export function checkCalculationInput(input: RuleInput, ctx: Context): void {
   checkBatten(input, ctx)
   checkItems(input, ctx)
   checkKind(input, ctx)
+  const lengths = input.liftLine?.lengths
+  if (lengths && lengths.length !== input.batten.pickPoints.length)
+    fail(ctx, ['liftLine', 'lengths'], 'Give one lift line length for each pick point, in the same order')
 }

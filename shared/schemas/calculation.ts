@@ -1,6 +1,7 @@
 import * as z from 'zod'
 import type { UnitSystem } from '../units/index.js'
 import { PIPE_SIZE_KEYS } from '../engine/pipes.js'
+import { ROPE_SIZE_KEYS } from '../engine/ropes.js'
 import { checkCalculationInput } from './calculation-rules.js'
 import { LINESET_KINDS, MAX_PICK_POINTS } from './lineset.js'
 import { count, designFactor, figure } from './quantity.js'
@@ -73,6 +74,15 @@ function inputFields(units: UnitSystem) {
         weightPerLength: f('liftLineWeightPerLength', 'Lift line weight per length').optional(),
         breakingStrength: f('ratedLoad', 'Breaking strength').optional(),
         designFactor: designFactor('Design factor').optional(),
+        // Each line's length from its head block, in pick point order: with a stiffness, the lines stretch.
+        lengths: z
+          .array(f('liftLineLength', 'Lift line length'), { error: 'Lift line lengths must be a list of lengths' })
+          .max(MAX_PICK_POINTS, `At most ${MAX_PICK_POINTS} lift line lengths`)
+          .optional(),
+        axialStiffness: f('ropeAxialStiffness', 'Rope stiffness (EA)').optional(),
+        rope: z
+          .enum(ROPE_SIZE_KEYS as [string, ...string[]], { error: `Rope must be one of ${ROPE_SIZE_KEYS.join(', ')}` })
+          .optional(),
       })
       .optional(),
     tolerance: f('tolerance', 'Tolerance').optional(),

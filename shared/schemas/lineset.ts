@@ -7,6 +7,7 @@ import { pickPointProblems, SINGLE_LINE_HEMP_RULE, wrongLineCount } from './batt
 import { count, figure, optionalFigure, typedInField, versionField } from './quantity.js'
 import { COUNT_RANGES } from './ranges.js'
 import { multiLineText, singleLineText } from './text.js'
+import { ROPE_SIZE_KEYS } from '../engine/ropes.js'
 
 /** Every kind of lineset a house may have; each is balanced and checked differently. */
 export const LINESET_KINDS = [
@@ -54,6 +55,17 @@ function linesetFields(units: UnitSystem) {
       .max(MAX_PICK_POINTS, `At most ${MAX_PICK_POINTS} lift lines`),
     liftLineWeightPerLength: optional('liftLineWeightPerLength', 'Lift line weight per length'),
     liftLineBreakingStrength: optional('ratedLoad', 'Breaking strength'),
+    // Each line's length from its head block, in lift line order; with a rope size or EA the lines stretch.
+    liftLineLengths: z
+      .array(required('liftLineLength', 'Lift line length'), { error: 'List the lift line lengths' })
+      .max(MAX_PICK_POINTS, `At most ${MAX_PICK_POINTS} lift line lengths`)
+      .nullable()
+      .optional(),
+    liftLineRope: z
+      .enum(ROPE_SIZE_KEYS as [string, ...string[]], { error: 'Choose a rope from the table' })
+      .nullable()
+      .optional(),
+    liftLineAxialStiffness: optional('ropeAxialStiffness', 'Rope stiffness (EA)'),
     arborEmptyWeight: optional('arborEmptyWeight', 'Arbor empty weight'),
     arborCapacity: optional('arborCapacity', 'Arbor capacity'),
     arborStackLength: optional('arborStackLength', 'Arbor stack length'),
@@ -88,6 +100,12 @@ function checkLineset(value: Partial<Record<keyof LinesetFields, unknown>>, ctx:
     require('arborCapacity', 'A counterweight set needs its arbor capacity')
   }
   if (value.kind === 'motorized') require('hoistRatedCapacity', 'A motorized set needs its hoist rated capacity')
+  if (Array.isArray(value.liftLineLengths) && value.liftLineLengths.length !== pickPoints.length)
+    ctx.addIssue({
+      code: 'custom',
+      path: ['liftLineLengths'],
+      message: 'Give one lift line length for each lift line, or none',
+    })
   if (wrongLineCount(value.kind, pickPoints.length))
     ctx.addIssue({ code: 'custom', path: ['pickPoints'], message: SINGLE_LINE_HEMP_RULE })
 }
@@ -146,6 +164,7 @@ export const LINESET_FIGURE_QUANTITIES = {
   pipeSectionModulus: 'sectionModulus',
   liftLineWeightPerLength: 'weightPerLength',
   liftLineBreakingStrength: 'weight',
+  liftLineAxialStiffness: 'weight',
   arborEmptyWeight: 'weight',
   arborCapacity: 'weight',
   arborStackLength: 'shortLength',

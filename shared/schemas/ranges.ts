@@ -60,6 +60,12 @@ export const FIGURE_RANGES = {
   fabricWeightPerArea: range('weightPerArea', '0.001', '20'),
   // A drape's finished height: the tallest cycloramas and house curtains stay under 30 m.
   fabricHeight: range('length', '0.01', '60'),
+  // A lift line from the batten up to its loft block and across to the head block: a short run is a metre or two,
+  // the tallest towers and widest stages together stay under 120 m; 200 m is past any of them.
+  liftLineLength: range('length', '0.1', '200'),
+  // A lift line's axial stiffness EA (force per unit strain, stated as a weight): 1/8 in aircraft cable is about
+  // 34,000 kg; a 40 mm hoist rope about 8,000,000 kg. Stiffer than 1e8 kg is no rope.
+  ropeAxialStiffness: range('weight', '100', '1e8'),
   // Balance tolerance and rope lock holding: a lock holds about 23 kg; a tolerance is a few kilograms.
   tolerance: range('weight', '0', '100'),
   ropeLockHolding: range('weight', '0', '500'),

@@ -17,10 +17,14 @@ export type LinesetDraft = {
   status: LinesetStatus
   pipeSize: string
   pickPoints: string[]
+  /** Each line's length from its head block, one per pick point (all blank when not known). */
+  liftLineLengths: string[]
+  /** A key of the rope table, or '' for none. */
+  liftLineRope: string
   notes: string
 } & Record<FigureKey, string>
 
-export type DraftTextKey = Exclude<keyof LinesetDraft, 'pickPoints' | 'kind' | 'status'>
+export type DraftTextKey = Exclude<keyof LinesetDraft, 'pickPoints' | 'liftLineLengths' | 'kind' | 'status'>
 
 const asText = (value: number | null | undefined) => (value === null || value === undefined ? '' : String(value))
 
@@ -34,6 +38,8 @@ export function emptyDraft(): LinesetDraft {
     status: 'in-service',
     pipeSize: '',
     pickPoints: [''],
+    liftLineLengths: [''],
+    liftLineRope: '',
     notes: '',
   }
 }
@@ -56,6 +62,8 @@ export function draftFrom(lineset: LinesetInput, figures: ExactFigures, system: 
     status: lineset.status,
     pipeSize: lineset.pipeSize,
     pickPoints: lineset.pickPoints.map((at) => show('pickPoints', at)),
+    liftLineLengths: lineset.pickPoints.map((_, index) => show('pickPoints', lineset.liftLineLengths?.[index])),
+    liftLineRope: lineset.liftLineRope ?? '',
     notes: lineset.notes ?? '',
   }
 }
@@ -92,6 +100,11 @@ export function bodyFrom(draft: LinesetDraft, figures: ExactFigures, system: Uni
     pipeSize: draft.pipeSize,
     pipeWeightPerLength: figure('pipeWeightPerLength'),
     pickPoints: draft.pickPoints.map((text) => figures.read(text, 'length', system)),
+    // No lengths at all is "not known"; some but not all is a mistake the schema names.
+    liftLineLengths: draft.liftLineLengths.every((text) => text.trim() === '')
+      ? null
+      : draft.liftLineLengths.map((text) => figures.read(text, 'length', system)),
+    liftLineRope: draft.liftLineRope === '' ? null : draft.liftLineRope,
     notes: draft.notes,
     // The server refuses figures typed in units the venue has since left.
     unitSystem: system,

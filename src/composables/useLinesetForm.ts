@@ -86,6 +86,24 @@ export function useLinesetForm(options: Options) {
     }
   }
 
+  function bindLineLength(index: number) {
+    const key = `liftLineLengths.${index}`
+    return {
+      modelValue: draft.liftLineLengths[index] ?? '',
+      'onUpdate:modelValue': (value: string | null) => {
+        draft.liftLineLengths[index] = value ?? ''
+        edited(key)
+        edited('liftLineLengths')
+      },
+      onBlur: () => {
+        touched.add(key)
+        touched.add('liftLineLengths')
+      },
+      errorMessages: messageFor(key),
+      readonly: options.readonly(),
+    }
+  }
+
   /** Marks everything for display and answers the valid body, or null when the schema refuses it. */
   function submit(): LinesetInput | null {
     submitted.value = true
@@ -105,6 +123,7 @@ export function useLinesetForm(options: Options) {
     fill,
     bind,
     bindPickPoint,
+    bindLineLength,
     submit,
     readonly: options.readonly,
   }

@@ -56,3 +56,40 @@ describe('LinesetBalanceResults with a slack line (issue 13)', () => {
     expect(wrapper.find('[data-testid="balance-counterweight"]').exists()).toBe(true)
   })
 })
+
+describe('LinesetBalanceResults with lift lines that stretch (issue 13 §3)', () => {
+  const even = {
+    batten: { length: 40, weightPerLength: 2.72, pickPoints: [0, 10, 20, 30, 40], pipeSize: 'nps-1-1/2-sch40' },
+    items: [{ weightPerLength: 25, from: 0, to: 40 }],
+  }
+
+  it('when stretching moves a load by more than 10 %, then the caution words come first and the basis is named', () => {
+    wrapper = show({
+      ...even,
+      liftLine: { ...set.liftLine, lengths: [40, 50, 60, 70, 80], rope: '7x19-galvanized-1/8' },
+    })
+    const caution = wrapper.get('[data-testid="balance-stretch-caution"]').text()
+    expect(caution).toMatch(
+      /^Caution: lift lines stretch, and the shorter ones take more\. A line's load moves by up to [\d.]+ %/,
+    )
+    expect(wrapper.html().indexOf('balance-stretch-caution')).toBeLessThan(
+      wrapper.html().indexOf('balance-line-0-load'),
+    )
+    expect(wrapper.get('[data-testid="balance-line-1-stretch-load"]').text()).toMatch(/^[\d,.]+ lb$/)
+    expect(wrapper.get('[data-testid="balance-stretch-basis"]').text()).toContain('(from memory, unverified)')
+  })
+
+  it('when the lines are stiff enough, then the stretching loads stand beside the rigid ones without a caution', () => {
+    wrapper = show({ ...even, liftLine: { ...set.liftLine, lengths: [20, 20, 20, 20, 20], axialStiffness: 2e8 } })
+    expect(wrapper.find('[data-testid="balance-stretch-caution"]').exists()).toBe(false)
+    expect(wrapper.get('[data-testid="balance-line-0-stretch-load"]').text()).toBe(
+      wrapper.get('[data-testid="balance-line-0-load"]').text(),
+    )
+    expect(wrapper.get('[data-testid="balance-stretch-basis"]').text()).toContain('rope stiffness (EA) as entered')
+  })
+
+  it('when the lineset gives no line lengths, then there is no stretching column', () => {
+    wrapper = show(even)
+    expect(wrapper.find('[data-testid="balance-line-0-stretch-load"]').exists()).toBe(false)
+  })
+})

@@ -157,3 +157,25 @@ describe('LinesetForm', () => {
     expect(body).toEqual({ ...metricSet, arborCapacity: 640 })
   })
 })
+
+describe('LinesetForm: how the lift lines stretch', () => {
+  it('when lengths and a rope are entered, then the body carries them and a line added keeps one length per line', async () => {
+    const w = mountForm({ initial: { ...counterweightSet, pickPoints: [5, 15, 25, 35] } })
+    for (const [index, length] of ['50', '60', '70', '80'].entries())
+      await input(w, `lineset-line-length-${index}`).setValue(length)
+    await input(w, 'lineset-field-liftLineAxialStiffness').setValue('300000')
+    await submit(w)
+    const [body] = w.emitted<[LinesetInput]>('submit')?.[0] ?? []
+    expect(body).toMatchObject({ liftLineLengths: [50, 60, 70, 80], liftLineAxialStiffness: 300000 })
+    await w.get('[data-testid="lineset-add-pick-point"]').trigger('click')
+    expect(w.findAll('[data-testid^="lineset-line-length-"]')).toHaveLength(5)
+  })
+
+  it('when only some lengths are entered, then the blank one asks for a number', async () => {
+    const w = mountForm({ initial: counterweightSet })
+    await input(w, 'lineset-line-length-0').setValue('50')
+    await submit(w)
+    expect(w.emitted('submit')).toBeUndefined()
+    expect(messagesOf(w, 'lineset-line-length-1')).toBe('Lift line length is required')
+  })
+})

@@ -7,6 +7,7 @@ import mailOutbox from './0006-mail-outbox.js'
 import ticketPlansDecisions from './0007-ticket-plans-decisions.js'
 import preRunChecks from './0008-pre-run-checks.js'
 import attachmentUploads from './0009-attachment-uploads.js'
+import liftLineStretch from './0010-lift-line-stretch.js'
 
 export interface Migration {
   name: string
@@ -26,4 +27,5 @@ export const migrations: Migration[] = [
   ticketPlansDecisions,
   preRunChecks,
   attachmentUploads,
+  liftLineStretch,
 ]

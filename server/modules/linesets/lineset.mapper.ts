@@ -20,6 +20,8 @@ const STORED_FIELDS = [
   ...Object.keys(LINESET_QUANTITIES),
   'pipeSize',
   'pickPoints',
+  'liftLineLengths',
+  'liftLineRope',
   'notes',
 ] as (keyof StoredLineset)[]
 
@@ -37,6 +39,8 @@ export function storedToApi(stored: StoredLineset, system: UnitSystem): Omit<Lin
     battenLength: figures.battenLength!,
     pipeWeightPerLength: figures.pipeWeightPerLength!,
     pickPoints: stored.pickPoints.map((at) => apiFromStored(at, 'length', system)!),
+    liftLineLengths: stored.liftLineLengths?.map((length) => apiFromStored(length, 'length', system)!) ?? null,
+    liftLineRope: stored.liftLineRope ?? null,
     unitSystem: system,
   }
 }
@@ -72,6 +76,8 @@ export function linesetFromApi(body: Omit<LinesetInput, 'unitSystem'>, system: U
     battenLength: figures.battenLength!,
     pipeWeightPerLength: figures.pipeWeightPerLength!,
     pickPoints: body.pickPoints.map((at) => storedFromApi(at, 'length', system)!),
+    liftLineLengths: body.liftLineLengths?.map((length) => storedFromApi(length, 'length', system)!) ?? null,
+    liftLineRope: body.liftLineRope ?? null,
   }
 }
 

@@ -35,6 +35,9 @@ export function defineLinesetModel(sequelize: Sequelize) {
     declare pickPoints: string[]
     declare liftLineWeightPerLength: string | null
     declare liftLineBreakingStrength: string | null
+    declare liftLineLengths: string[] | null
+    declare liftLineRope: string | null
+    declare liftLineAxialStiffness: string | null
     declare arborEmptyWeight: string | null
     declare arborCapacity: string | null
     declare arborStackLength: string | null
@@ -67,6 +70,9 @@ export function defineLinesetModel(sequelize: Sequelize) {
       pickPoints: { type: DataTypes.ARRAY(DataTypes.DECIMAL), allowNull: false },
       liftLineWeightPerLength: optionalDecimal(),
       liftLineBreakingStrength: optionalDecimal(),
+      liftLineLengths: { type: DataTypes.ARRAY(DataTypes.DECIMAL), allowNull: true },
+      liftLineRope: { type: DataTypes.TEXT, allowNull: true },
+      liftLineAxialStiffness: optionalDecimal(),
       arborEmptyWeight: optionalDecimal(),
       arborCapacity: optionalDecimal(),
       arborStackLength: optionalDecimal(),

@@ -7,6 +7,7 @@ import { renderPdf, type PdfDocument } from './pdf-document.js'
 import { balanceWords, bricksWords, printedDay, useOf, weightWords } from './paper-words.js'
 import { drawQrCode, qrMatrix } from './qr-code.js'
 import type { RailCardFacts } from './rail-card-facts.js'
+import { heaviestLineLoad, railCardLoadLines } from './rail-card-loads.js'
 
 // A5 portrait: big enough to read at arm's length on a lock rail, small enough for a clip or a pin.
 const MARGIN = 24
@@ -19,6 +20,7 @@ export function railCardPdf(facts: RailCardFacts): Promise<Buffer> {
     const width = doc.page.width - 2 * MARGIN
     heading(doc, facts, width)
     section(doc, 'Hanging now', hangLines(facts), width)
+    section(doc, 'Lift line loads', railCardLoadLines(facts.hang?.result, facts.venue.unitSystem), width)
     section(doc, 'Arbor', arborLines(facts), width)
     section(doc, 'Capacities and use', capacityLines(facts), width)
     cautions(doc, width - QR_SIDE - 12)
@@ -74,7 +76,7 @@ function capacityLines({ lineset, hang, bricks, venue }: RailCardFacts): string[
     lines.push(`Arbor capacity: ${useOf(aboard, lineset.arborCapacity, system)} in bricks`)
   }
   if (result?.lineWorkingLoadLimit !== undefined && result.lineLoads.length) {
-    const heaviest = Math.max(...result.lineLoads.map((line) => line.load))
+    const heaviest = heaviestLineLoad(result)
     lines.push(
       `Lift line working load limit: ${useOf(inVenueUnits(heaviest), inVenueUnits(result.lineWorkingLoadLimit), system)} on the heaviest line`,
     )

@@ -1,8 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Board, BoardLineset } from '../../shared/schemas/board.js'
+import { cookieHeader, cookiesSet } from '../support/cookies.js'
 import { openEventStream, sessionCookie, type EventStream } from '../support/event-stream.js'
 import { seedVenue, type VenueFixture } from '../support/fixtures.js'
-import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import { Client, signedIn, startTestApp, type TestApp } from '../support/test-app.js'
 import { hungLineset } from '../support/tickets.js'
 
 // Two app processes on one database, as behind a load balancer: changes made through one reach the board
@@ -166,6 +167,28 @@ describe('the board stream', () => {
   it('when a board stays open, then it hears a keep-alive comment line at the configured interval', async () => {
     const open = await stream(second, alpha.emails['stage-manager'])
     await open.next((event) => event.event === 'comment' && event.comment === 'keep-alive')
+  })
+
+  it('when the member signs out, then the board stream they opened ends at the next keep-alive', async () => {
+    const member = new Client(second.url)
+    const signIn = await member.signIn(alpha.emails['stage-manager'])
+    const open = await openEventStream(`${second.url}/api/v1/board/stream`, cookieHeader(cookiesSet(signIn)))
+    streams.push(open)
+    await open.next((event) => event.event === 'comment' && event.comment === 'keep-alive')
+    expect(open.ended).toBe(false)
+
+    await member.delete('/api/v1/session').expect(204)
+    await expect.poll(() => open.ended, { timeout: 5000, interval: 10 }).toBe(true)
+  })
+
+  it('when a member leaves the venue, then the board stream they opened ends at the next keep-alive', async () => {
+    const open = await stream(second, beta.emails['fly-operator'])
+    await open.next((event) => event.event === 'comment' && event.comment === 'keep-alive')
+    await second.handle.db.sequelize.query(
+      `DELETE FROM memberships WHERE venue_id = $1 AND user_id = (SELECT id FROM users WHERE email = $2)`,
+      { bind: [beta.venueId, beta.emails['fly-operator']] },
+    )
+    await expect.poll(() => open.ended, { timeout: 5000, interval: 10 }).toBe(true)
   })
 
   it('when boards disconnect, then the app process holds no subscriber for them', async () => {

@@ -2,6 +2,7 @@ import type { Request, RequestHandler, Response } from 'express'
 import { memberContext, type AppContext } from '../../context.js'
 import type { LiveHub } from '../../live/live-hub.js'
 import type { LiveEvent } from '../../live/live-publisher.js'
+import { streamStillAllowed } from './board-access.js'
 import { resyncMessage, streamMessage } from './board-events.js'
 import { missedEvents, newestEventId } from './board-replay.js'
 
@@ -14,7 +15,8 @@ const log = (error: unknown) =>
  * `GET /board/stream`: the venue's changes as server-sent events. A fresh stream starts with `ready` (carrying
  * the newest id, so the browser's automatic reconnect sends it back as Last-Event-ID); a reconnect with
  * `Last-Event-ID` first hears what it missed from the database, or `resync` when that is too much. Writes go
- * one after another in order; an event replayed and then heard live is sent once.
+ * one after another in order; an event replayed and then heard live is sent once. Each keep-alive first checks
+ * that the session and membership still allow the stream, and ends it when they do not (or cannot be read).
  */
 export function boardStream(app: AppContext, hub: LiveHub, keepAliveMs: number): RequestHandler {
   return async (req: Request, res: Response) => {
@@ -64,7 +66,17 @@ export function boardStream(app: AppContext, hub: LiveHub, keepAliveMs: number):
         noteId(event.eventId)
       })
 
-    const keepAlive = setInterval(() => write(': keep-alive\n\n'), keepAliveMs)
+    let checking = false // one check at a time, however short the interval
+    const keepAlive = setInterval(() => {
+      if (checking) return
+      checking = true
+      later(async () => {
+        const allowed = await streamStillAllowed(ctx, req.sessionID).catch(() => false)
+        checking = false
+        if (allowed) write(': keep-alive\n\n')
+        else end()
+      })
+    }, keepAliveMs)
     let unsubscribe = () => {}
     const end = () => {
       if (!open) return

@@ -2,8 +2,12 @@ import type { LinesetKind, LinesetStatus } from '../../../shared/schemas/lineset
 import type { FeltBalance } from '../../../shared/schemas/operating-status.js'
 import type { TicketState } from '../../../shared/schemas/workflow-states.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
-import type { TransactionContext } from '../../context.js'
-import { rows } from '../brick-stock/stock-sql.js'
+import { QueryTypes } from 'sequelize'
+import type { ServiceContext } from '../../context.js'
+
+// Reads that need no transaction of their own: in the caller's when there is one, else each on its own.
+const rows = <T extends object>(ctx: ServiceContext, sql: string, bind: unknown[]) =>
+  ctx.db.sequelize.query<T>(sql, { bind, type: QueryTypes.SELECT, transaction: ctx.transaction })
 
 /** One lineset with everything the board shows and its operating status is decided from, in SI. */
 export interface BoardRow {
@@ -25,6 +29,8 @@ export interface BoardRow {
   hangRevision: number | null
   /** kg, as a plain number (display only). */
   hangTotalLoad: number | null
+  /** kg, as exact decimal text (for the lineset list's figures, rounded as every stored figure is). */
+  hangTotalLoadExact: string | null
   hangProductionId: string | null
   hangUnits: UnitSystem | null
   /** The engine's batten side, in the hang's units. */
@@ -42,7 +48,7 @@ export interface BoardRow {
  * For a completed weight change, "by" is whoever approved the ticket; for anything else, who did it.
  */
 export function boardRows(
-  tx: TransactionContext,
+  tx: ServiceContext,
   filter: { productionId?: string | null; linesetId?: string | null } = {},
 ): Promise<BoardRow[]> {
   return rows<BoardRow>(
@@ -52,7 +58,8 @@ export function boardRows(
             l.lockout_reason AS "lockoutReason", l.locked_out_at AS "lockedOutAt", l.locked_out_by AS "lockedOutBy",
             lu.name AS "lockedOutByName", ticket.state AS "openTicket",
             h.id AS "hangId", h.title AS "hangTitle", h.revision AS "hangRevision",
-            h.total_load::float8 AS "hangTotalLoad", h.production_id AS "hangProductionId", h.unit_system AS "hangUnits",
+            h.total_load::float8 AS "hangTotalLoad",
+            h.total_load::text AS "hangTotalLoadExact", h.production_id AS "hangProductionId", h.unit_system AS "hangUnits",
             (h.calculation_result -> 'counterweight' ->> 'battenSide')::float8 AS "battenSide",
             e.id::text AS "changeId", e.event_type AS "changeType", e.occurred_at AS "changeAt",
             eu.id AS "changeById", eu.name AS "changeByName"
@@ -84,7 +91,7 @@ export function boardRows(
 }
 
 /** The venue's units and balance tolerance (kg, exact text). */
-export async function venueBoardPolicy(tx: TransactionContext) {
+export async function venueBoardPolicy(tx: ServiceContext) {
   const [venue] = await rows<{ unitSystem: UnitSystem; tolerance: string }>(
     tx,
     'SELECT unit_system AS "unitSystem", balance_tolerance::text AS tolerance FROM venues WHERE id = $1',

@@ -42,14 +42,29 @@ export interface BoardRow {
   changeByName: string | null
 }
 
+const LAST_CHANGE_COLUMNS = `e.id::text AS "changeId", e.event_type AS "changeType", e.occurred_at AS "changeAt",
+            eu.id AS "changeById", eu.name AS "changeByName"`
+const NO_LAST_CHANGE = `NULL AS "changeId", NULL AS "changeType", NULL AS "changeAt", NULL AS "changeById",
+            NULL AS "changeByName"`
+// The approving ticket is found by its key (the ledger entry names it), not by comparing every ticket's id as text.
+const LAST_CHANGE_JOINS = `LEFT JOIN LATERAL (
+         SELECT id, event_type, occurred_at, actor_id, payload
+           FROM lineset_events WHERE lineset_id = l.id ORDER BY id DESC LIMIT 1) e ON true
+       LEFT JOIN weight_change_tickets approved
+         ON approved.venue_id = l.venue_id
+        AND approved.id = (CASE WHEN e.event_type = 'ticket-loaded' THEN e.payload -> 'ticket' ->> 'id' END)::uuid
+       LEFT JOIN users eu ON eu.id = coalesce(approved.decided_by, e.actor_id)`
+
 /**
  * The whole board in one statement: each lineset with its latest hang, its furthest-along open ticket, its
  * arbor's weight and its latest ledger entry, each found through an index (never a query per lineset).
  * For a completed weight change, "by" is whoever approved the ticket; for anything else, who did it.
+ * `lastChange: false` leaves the ledger out (its change fields null) for readers that do not show it.
  */
 export function boardRows(
   tx: ServiceContext,
   filter: { productionId?: string | null; linesetId?: string | null } = {},
+  { lastChange = true } = {},
 ): Promise<BoardRow[]> {
   return rows<BoardRow>(
     tx,
@@ -61,8 +76,7 @@ export function boardRows(
             h.total_load::float8 AS "hangTotalLoad",
             h.total_load::text AS "hangTotalLoadExact", h.production_id AS "hangProductionId", h.unit_system AS "hangUnits",
             (h.calculation_result -> 'counterweight' ->> 'battenSide')::float8 AS "battenSide",
-            e.id::text AS "changeId", e.event_type AS "changeType", e.occurred_at AS "changeAt",
-            eu.id AS "changeById", eu.name AS "changeByName"
+            ${lastChange ? LAST_CHANGE_COLUMNS : NO_LAST_CHANGE}
        FROM linesets l
        LEFT JOIN users lu ON lu.id = l.locked_out_by
        LEFT JOIN LATERAL (
@@ -75,13 +89,7 @@ export function boardRows(
        LEFT JOIN LATERAL (
          SELECT sum(a.count * b.unit_weight) AS bricks
            FROM arbor_bricks a JOIN brick_types b ON b.id = a.brick_type_id WHERE a.lineset_id = l.id) arbor ON true
-       LEFT JOIN LATERAL (
-         SELECT id, event_type, occurred_at, actor_id, payload
-           FROM lineset_events WHERE lineset_id = l.id ORDER BY id DESC LIMIT 1) e ON true
-       LEFT JOIN weight_change_tickets approved
-         ON e.event_type = 'ticket-loaded' AND approved.venue_id = l.venue_id
-        AND approved.id::text = e.payload -> 'ticket' ->> 'id'
-       LEFT JOIN users eu ON eu.id = coalesce(approved.decided_by, e.actor_id)
+       ${lastChange ? LAST_CHANGE_JOINS : ''}
       WHERE l.venue_id = $1 AND l.retired_at IS NULL
         AND ($2::uuid IS NULL OR h.production_id = $2::uuid)
         AND ($3::uuid IS NULL OR l.id = $3::uuid)

@@ -19,7 +19,7 @@ export async function listedStates(
   system: UnitSystem,
   tolerance: string,
 ): Promise<Map<string, ListedState>> {
-  const found = await boardRows(ctx)
+  const found = await boardRows(ctx, {}, { lastChange: false })
   return new Map(
     found.map((row) => [
       row.id,

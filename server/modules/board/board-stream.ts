@@ -36,8 +36,9 @@ export function boardStream(app: AppContext, hub: LiveHub, keepAliveMs: number):
     res.write('retry: 2000\n\n')
 
     let open = true
-    // The id and horizon the last message carried: where this stream would resume from.
-    let position: StreamPosition | null = null
+    const from = resumeFrom(req.get('Last-Event-ID'))
+    // The id and horizon the last message carried (at first, the ones asked with): where this stream resumes from.
+    let position: StreamPosition | null = from
     let replayed = new Set<string>()
     let queue = Promise.resolve()
     const write = (text: string) => {
@@ -94,7 +95,6 @@ export function boardStream(app: AppContext, hub: LiveHub, keepAliveMs: number):
       res.end()
     }
     req.on('close', end)
-    const from = resumeFrom(req.get('Last-Event-ID'))
     // Read before listening: whatever commits once this stream listens is at or after it.
     const startHorizon = from ? null : await currentHorizon(ctx).catch(() => null)
     unsubscribe = await hub.subscribe({

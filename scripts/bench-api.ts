@@ -154,12 +154,21 @@ async function main() {
         say(
           `a change through the API reaching ${delivery.streams} open boards (${delivery.changes} changes, from the ` +
             `write's answer to the event's arrival): median ${delivery.medianMs.toFixed(1)} ms, p95 ` +
-            `${delivery.p95Ms.toFixed(1)} ms, slowest ${delivery.maxMs.toFixed(1)} ms (targets: p95 < ` +
+            `${delivery.p95Ms.toFixed(1)} ms, slowest ${delivery.maxMs.toFixed(1)} ms; from sending the write: median ` +
+            `${delivery.fromRequest.medianMs.toFixed(1)} ms, p95 ${delivery.fromRequest.p95Ms.toFixed(1)} ms, slowest ` +
+            `${delivery.fromRequest.maxMs.toFixed(1)} ms (targets: p95 < ` +
             `${STREAM_P95_TARGET_MS} ms, every one < ${STREAM_MAX_TARGET_MS} ms)`,
         )
-      const slowStream = delivery && (delivery.p95Ms >= STREAM_P95_TARGET_MS || delivery.maxMs >= STREAM_MAX_TARGET_MS)
+      // Judged from sending the write: the stricter of the two, and what the person making the change sees.
+      const slowStream =
+        delivery &&
+        (delivery.fromRequest.p95Ms >= STREAM_P95_TARGET_MS || delivery.fromRequest.maxMs >= STREAM_MAX_TARGET_MS)
       const missed =
-        !list || list.p95Ms >= LIST_P95_TARGET_MS || !(ratio >= CALCULATION_RATIO_TARGET) || Boolean(slowStream)
+        !list ||
+        list.p95Ms >= LIST_P95_TARGET_MS ||
+        (figures.get('GET /api/v1/board')?.p95Ms ?? 0) >= LIST_P95_TARGET_MS ||
+        !(ratio >= CALCULATION_RATIO_TARGET) ||
+        Boolean(slowStream)
       say(missed ? 'a target was missed' : 'targets met')
       process.exitCode = [...figures.values()].some((f) => f.failures) ? 1 : 0
     } finally {

@@ -27,6 +27,13 @@ export interface LiveEvent {
    * for everything after the last id it heard.
    */
   eventId?: string
+  /**
+   * The oldest transaction still running while the change was made (`pg_snapshot_xmin`, as text), set by the
+   * publisher. Changes commit in their own order, not their ids': whatever commits after this one was made by a
+   * transaction numbered at or above its horizon, which is how a reconnecting board finds changes that committed
+   * late with a smaller id than the last one it heard.
+   */
+  horizon?: string
 }
 
 /** Announces changes to every app process; an event is delivered only if `transaction` commits. */

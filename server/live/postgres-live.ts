@@ -5,6 +5,10 @@ import type { LiveEvent, LivePublisher } from './live-publisher.js'
 /** The one PostgreSQL channel live events travel on. */
 export const LIVE_CHANNEL = 'loftledger_live'
 
+// The horizon is read inside the change's own transaction, before it commits (see LiveEvent.horizon).
+const NOTIFY_WITH_HORIZON = `SELECT pg_notify(:channel, (CAST(:payload AS jsonb)
+  || jsonb_build_object('horizon', pg_snapshot_xmin(pg_current_snapshot())::text))::text)`
+
 /**
  * Publishes with `pg_notify` inside the caller's transaction: PostgreSQL delivers it on commit and drops it
  * on rollback, so no screen hears of a change that did not happen, and every app process hears of it.
@@ -12,7 +16,7 @@ export const LIVE_CHANNEL = 'loftledger_live'
 export function postgresLivePublisher(sequelize: Sequelize): LivePublisher {
   return {
     async publish(event, transaction) {
-      await sequelize.query('SELECT pg_notify(:channel, :payload)', {
+      await sequelize.query(NOTIFY_WITH_HORIZON, {
         replacements: { channel: LIVE_CHANNEL, payload: JSON.stringify(event) },
         transaction,
       })

@@ -1,8 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { Board, BoardLineset } from '../../shared/schemas/board.js'
+import { cookieHeader, cookiesSet } from '../support/cookies.js'
 import { openEventStream, sessionCookie, type EventStream } from '../support/event-stream.js'
 import { seedVenue, type VenueFixture } from '../support/fixtures.js'
-import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import { Client, signedIn, startTestApp, type TestApp } from '../support/test-app.js'
 import { hungLineset } from '../support/tickets.js'
 
 // Two app processes on one database, as behind a load balancer: changes made through one reach the board
@@ -46,6 +47,8 @@ const board = async (client: Client, query = '') =>
   (await client.get(`/api/v1/board${query}`).expect(200)).body as Board
 const row = (found: Board, id: string) => found.linesets.find((lineset) => lineset.id === id) as BoardLineset
 let nextNumber = 600
+/** The event id of a stream id (`<id>.<horizon>`). */
+const eventIdOf = (wire: string) => BigInt(wire.split('.')[0]!)
 
 describe('the board', () => {
   it('when a set is hung and another locked out, then the board says so in number order, in the venue units, with who did it', async () => {
@@ -135,7 +138,8 @@ describe('the board stream', () => {
     await director.post(`/api/v1/linesets/${alpha.linesetId}/lockout`, { reason: 'Rope lock slipping' }).expect(201)
     const heard = await mine.next((event) => event.event === 'lockout')
     expect(heard.data).toMatchObject({ linesetId: alpha.linesetId, type: 'lineset-locked-out' })
-    expect(heard.id).toBe(heard.data!.id)
+    // The id on the wire is the event's, then the horizon a reconnect resumes from.
+    expect(heard.id).toMatch(new RegExp(`^${heard.data!.id}\\.\\d+$`))
 
     // The other venue's own change arrives, and it is the only thing it heard.
     await betaDirector.post(`/api/v1/linesets/${beta.linesetId}/lockout`, { reason: 'Inspection' }).expect(201)
@@ -158,14 +162,72 @@ describe('the board stream', () => {
     await after.next((event) => event.event === 'lockout')
     const missed = after.heard.filter((event) => event.data?.linesetId === linesetId)
     expect(missed.map((event) => event.event)).toEqual(['lineset', 'hang', 'lockout'])
-    const ids = missed.map((event) => BigInt(event.id!))
+    const ids = missed.map((event) => eventIdOf(event.id!))
     expect(ids).toEqual([...ids].sort((a, b) => (a < b ? -1 : 1)))
-    expect(ids[0]! > BigInt(ready.id!)).toBe(true)
+    expect(ids[0]! > eventIdOf(ready.id!)).toBe(true)
+  })
+
+  it('when a change with a smaller id commits after a board heard a later one and went away, then its reconnect still hears it', async () => {
+    const { db, live } = first.handle.context
+    const before = await stream(second, alpha.emails['stage-manager'])
+    await before.next((event) => event.event === 'ready')
+
+    // A slow change takes its id first and holds its transaction open while a quicker one commits.
+    let finish = () => {}
+    const held = new Promise<void>((resolve) => (finish = resolve))
+    let slowId = ''
+    const slow = db.sequelize.transaction(async (transaction) => {
+      const [[row]] = (await db.sequelize.query(
+        `INSERT INTO lineset_events (venue_id, lineset_id, actor_id, event_type, payload)
+         VALUES ($1, $2, NULL, 'lineset-changed', '{}') RETURNING id::text AS id`,
+        { bind: [alpha.venueId, alpha.linesetId], transaction },
+      )) as [[{ id: string }], unknown]
+      slowId = row.id
+      await live.publish(
+        { type: 'lineset-changed', venueId: alpha.venueId, linesetId: alpha.linesetId, eventId: slowId },
+        transaction,
+      )
+      await held
+    })
+    await expect.poll(() => slowId).not.toBe('')
+    await director.post(`/api/v1/linesets/${alpha.linesetId}/lockout`, { reason: 'Quick one' }).expect(201)
+    const quick = await before.next((event) => event.event === 'lockout')
+    expect(eventIdOf(quick.id!) > BigInt(slowId)).toBe(true)
+    before.close()
+
+    finish()
+    await slow // committed while no board of this member was listening
+    const after = await stream(second, alpha.emails['stage-manager'], quick.id!)
+    const caught = await after.next((event) => event.data?.id === slowId)
+    expect(caught).toMatchObject({ event: 'lineset', data: { linesetId: alpha.linesetId, type: 'lineset-changed' } })
+    await director.delete(`/api/v1/linesets/${alpha.linesetId}/lockout`).expect(204)
   })
 
   it('when a board stays open, then it hears a keep-alive comment line at the configured interval', async () => {
     const open = await stream(second, alpha.emails['stage-manager'])
     await open.next((event) => event.event === 'comment' && event.comment === 'keep-alive')
+  })
+
+  it('when the member signs out, then the board stream they opened ends at the next keep-alive', async () => {
+    const member = new Client(second.url)
+    const signIn = await member.signIn(alpha.emails['stage-manager'])
+    const open = await openEventStream(`${second.url}/api/v1/board/stream`, cookieHeader(cookiesSet(signIn)))
+    streams.push(open)
+    await open.next((event) => event.event === 'comment' && event.comment === 'keep-alive')
+    expect(open.ended).toBe(false)
+
+    await member.delete('/api/v1/session').expect(204)
+    await expect.poll(() => open.ended, { timeout: 5000, interval: 10 }).toBe(true)
+  })
+
+  it('when a member leaves the venue, then the board stream they opened ends at the next keep-alive', async () => {
+    const open = await stream(second, beta.emails['fly-operator'])
+    await open.next((event) => event.event === 'comment' && event.comment === 'keep-alive')
+    await second.handle.db.sequelize.query(
+      `DELETE FROM memberships WHERE venue_id = $1 AND user_id = (SELECT id FROM users WHERE email = $2)`,
+      { bind: [beta.venueId, beta.emails['fly-operator']] },
+    )
+    await expect.poll(() => open.ended, { timeout: 5000, interval: 10 }).toBe(true)
   })
 
   it('when boards disconnect, then the app process holds no subscriber for them', async () => {

@@ -54,6 +54,7 @@ describe('live events', () => {
         venueId: venue.venueId,
         linesetId: created.id,
         eventId: expect.stringMatching(/^[1-9]\d*$/),
+        horizon: expect.stringMatching(/^\d+$/),
       })
   })
 

@@ -79,7 +79,8 @@ describe('pre-run checks', () => {
       await open.next((event) => event.event === 'ready')
       const check = (await stageManager.post('/api/v1/pre-run-checks', {}).expect(201)).body as PreRunCheck
       const heard = await open.next((event) => event.event === 'pre-run-check')
-      expect(heard.id).toBe(check.id)
+      expect(heard.data!.id).toBe(check.id)
+      expect(heard.id).toMatch(new RegExp(`^${check.id}\\.\\d+$`)) // the id, then the horizon to resume from
     } finally {
       open.close()
     }

@@ -15,6 +15,8 @@ export interface HeardEvent {
 export interface EventStream {
   status: number
   heard: HeardEvent[]
+  /** Whether the server has ended the answer. */
+  readonly ended: boolean
   /** Waits until an event matching `wanted` has been heard (a state, polled), and answers it. */
   next(wanted: (event: HeardEvent) => boolean, timeout?: number): Promise<HeardEvent>
   close(): void
@@ -64,10 +66,15 @@ export function openEventStream(url: string, cookie: string | null, lastEventId?
           if (parsed) heard.push(parsed)
         }
       })
+      let ended = false
+      res.on('end', () => (ended = true))
       res.on('error', () => {})
       resolve({
         status: res.statusCode ?? 0,
         heard,
+        get ended() {
+          return ended
+        },
         async next(wanted, timeout = 5000) {
           await expect.poll(() => heard.find(wanted), { timeout, interval: 10 }).toBeDefined()
           return heard.find(wanted)!

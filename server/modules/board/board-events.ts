@@ -11,13 +11,22 @@ export function streamEventName(type: string): BoardStreamEvent {
   return 'lineset'
 }
 
+/**
+ * The id a board is sent, and sends back as Last-Event-ID when it reconnects: the event's id, and the horizon
+ * (see `LiveEvent.horizon`) that makes resuming from it miss nothing, as `<id>.<horizon>`.
+ */
+export const wireId = (id: string, horizon: string | null | undefined) => (horizon ? `${id}.${horizon}` : id)
+
 /** One server-sent event as written on the wire: name, id (when known) and its JSON data. */
-export function streamMessage(event: Pick<LiveEvent, 'type' | 'linesetId' | 'eventId'>): string {
+export function streamMessage(
+  event: Pick<LiveEvent, 'type' | 'linesetId' | 'eventId'>,
+  horizon: string | null,
+): string {
   const data: BoardStreamData = { id: event.eventId ?? null, type: event.type, linesetId: event.linesetId }
-  const id = event.eventId ? `id: ${event.eventId}\n` : ''
+  const id = event.eventId ? `id: ${wireId(event.eventId, horizon)}\n` : ''
   return `event: ${streamEventName(event.type)}\n${id}data: ${JSON.stringify(data)}\n\n`
 }
 
 /** A stream message that carries only an id and tells the page to read the whole board again. */
-export const resyncMessage = (id: string | null) =>
-  `event: resync\n${id ? `id: ${id}\n` : ''}data: ${JSON.stringify({ id })}\n\n`
+export const resyncMessage = (id: string | null, horizon: string | null = null) =>
+  `event: resync\n${id ? `id: ${wireId(id, horizon)}\n` : ''}data: ${JSON.stringify({ id })}\n\n`

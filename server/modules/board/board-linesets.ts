@@ -37,6 +37,17 @@ export function boardOperatingStatus(row: BoardRow, tolerance: string) {
   })
 }
 
+/** A board row's lock-out as the API shows it, or null. */
+export function boardLockout(row: BoardRow) {
+  return row.lockedOutAt === null
+    ? null
+    : {
+        reason: row.lockoutReason!,
+        at: row.lockedOutAt.toISOString(),
+        by: row.lockedOutBy ? { id: row.lockedOutBy, name: row.lockedOutByName ?? '' } : null,
+      }
+}
+
 /** A board row as the API shows it, figures in the venue's units. */
 export function boardLineset(row: BoardRow, tolerance: string, system: UnitSystem): BoardLineset {
   return {
@@ -65,13 +76,6 @@ export function boardLineset(row: BoardRow, tolerance: string, system: UnitSyste
             at: row.changeAt!.toISOString(),
             by: row.changeById ? { id: row.changeById, name: row.changeByName ?? '' } : null,
           },
-    lockout:
-      row.lockedOutAt === null
-        ? null
-        : {
-            reason: row.lockoutReason!,
-            at: row.lockedOutAt.toISOString(),
-            by: row.lockedOutBy ? { id: row.lockedOutBy, name: row.lockedOutByName ?? '' } : null,
-          },
+    lockout: boardLockout(row),
   }
 }

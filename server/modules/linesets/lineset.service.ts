@@ -8,10 +8,11 @@ import type {
 } from '../../../shared/schemas/lineset.js'
 import { inTransaction, type ServiceContext, type TransactionContext } from '../../context.js'
 import { AppError, notFound, staleVersion } from '../../http/errors.js'
-import { currentHangs } from '../hangs/current-hangs.js'
+import { venueBoardPolicy } from '../board/board-rows.js'
 import { unitsTypedIn } from '../venues/units.js'
 import { venueUnitSystem } from '../venues/venue.service.js'
 import { recordLinesetChange } from './lineset-history.js'
+import { listedStates } from './lineset-list-states.js'
 import { operatingStates } from './operating-states.js'
 import { changedFields, linesetFromApi, linesetToApi, storedFromRow } from './lineset.mapper.js'
 import { refuseWhileHolding } from './lineset-holdings.js'
@@ -23,25 +24,23 @@ const UNKNOWN_STATE: LinesetOperating = { operatingStatus: 'ready', lockout: nul
 
 /** Every lineset in service or not, in number order, with its latest saved hang; retired ones are history only. */
 export async function listLinesets(ctx: ServiceContext): Promise<LinesetListItem[]> {
-  // Four independent reads, each its own statement as before, sent at once rather than one after another: the
-  // answer waits for the slowest, not for the sum of their round trips.
-  const units = venueUnitSystem(ctx)
-  const [system, rows, hangs, states] = await Promise.all([
-    units,
+  // Three independent reads sent at once: the venue's units and tolerance, the linesets' own rows, and their
+  // states in one statement. The answer waits for the slowest, not for the sum of their round trips.
+  const venue = venueBoardPolicy(ctx)
+  const [policy, rows, states] = await Promise.all([
+    venue,
     ctx.db.models.Lineset.findAll({
       where: active(ctx.actor.venueId),
       order: [['number', 'ASC']],
       transaction: ctx.transaction,
       raw: true, // plain rows: the list only reads them
     }),
-    units.then((system) => currentHangs(ctx, system)),
-    operatingStates(ctx),
+    venue.then((policy) => listedStates(ctx, policy.unitSystem, policy.tolerance)),
   ])
-  return rows.map((row) => ({
-    ...linesetToApi(row, system),
-    ...(states.get(row.id) ?? UNKNOWN_STATE),
-    currentHang: hangs.get(row.id) ?? null,
-  }))
+  return rows.map((row) => {
+    const { currentHang, ...state } = states.get(row.id) ?? { ...UNKNOWN_STATE, currentHang: null }
+    return { ...linesetToApi(row, policy.unitSystem), ...state, currentHang }
+  })
 }
 
 async function findOwn(ctx: ServiceContext, id: string) {

@@ -1,6 +1,9 @@
 import '../styles/roboto.css'
 import '../styles/print.css'
-import 'vuetify/styles'
+// Vuetify's base and utility classes without its palette classes (bg-red-lighten-2, ...): colours here come only
+// from the theme below, so the palette (about 40 KB of CSS) never reaches a page.
+import 'vuetify/styles/core'
+import 'vuetify/styles/utilities'
 import { createVuetify } from 'vuetify'
 import { aliases } from 'vuetify/iconsets/mdi-svg'
 import { pathIcons } from './icons/pathIcons'

@@ -39,7 +39,9 @@ beforeAll(async () => {
  * Controls taken out of the tab order on purpose (tabindex="-1", e.g. a field's clear icon, whose job the keys
  * already do) and disabled ones are not counted. Transitions are switched off so styles read are final ones.
  */
-function watchFocus() {
+// Plain script text, not a function: this file compiles for Node, without the browser's types, and the text is
+// evaluated in the page through the debugging protocol.
+const WATCH_FOCUS = `(() => {
   const CONTROLS =
     'a[href], button, input:not([type=hidden]), select, textarea, [role=button], [role=link], [role=tab], ' +
     '[role=checkbox], [role=combobox], [role=switch], [tabindex]'
@@ -51,40 +53,32 @@ function watchFocus() {
   style.textContent = '*, *::before, *::after { transition: none !important; animation: none !important; }'
   document.head.append(style)
 
-  const look = (element: Element) => {
+  const look = (element) => {
     const wrapper = element.closest(WRAPPERS) ?? element
     const parts = [element, wrapper, ...wrapper.querySelectorAll(PARTS)]
     return parts
       .flatMap((part) =>
         [getComputedStyle(part), getComputedStyle(part, '::before'), getComputedStyle(part, '::after')].map((s) =>
-          [
-            s.outlineStyle,
-            s.outlineWidth,
-            s.outlineColor,
-            s.boxShadow,
-            s.borderTopWidth,
-            s.borderTopColor,
-            s.backgroundColor,
-            s.opacity,
-          ].join(' '),
+          [s.outlineStyle, s.outlineWidth, s.outlineColor, s.boxShadow, s.borderTopWidth, s.borderTopColor,
+            s.backgroundColor, s.opacity].join(' '),
         ),
       )
       .join('|')
   }
-  const visible = (element: HTMLElement) => {
+  const visible = (element) => {
     const box = element.getBoundingClientRect()
     return box.width > 0 && box.height > 0 && element.checkVisibility({ visibilityProperty: true })
   }
-  const describe = (element: HTMLElement) => {
+  const describe = (element) => {
     const id = element.closest('[data-testid]')?.getAttribute('data-testid') ?? ''
     const name = (element.getAttribute('aria-label') ?? element.textContent ?? '').trim().slice(0, 40)
-    const kind = element instanceof HTMLInputElement ? `${element.type}:${element.name}` : ''
-    return `${element.tagName.toLowerCase()}${kind ? `(${kind})` : ''}${id ? `[${id}]` : ''} "${name}"`
+    const kind = element instanceof HTMLInputElement ? '(' + element.type + ':' + element.name + ')' : ''
+    return element.tagName.toLowerCase() + kind + (id ? '[' + id + ']' : '') + ' "' + name + '"'
   }
   // Read afresh each time: a part of the page that redraws itself (a panel whose list arrives) puts new elements
   // in place of the old, so controls are known by what they are, not by which element shows them.
   const collect = () =>
-    [...document.querySelectorAll<HTMLElement>(CONTROLS)].filter(
+    [...document.querySelectorAll(CONTROLS)].filter(
       (element) =>
         visible(element) &&
         element.tabIndex >= 0 &&
@@ -93,38 +87,39 @@ function watchFocus() {
     )
   const controls = collect()
   const unfocused = new Map(controls.map((element) => [describe(element), look(element)]))
-  const reached = new Set<string>()
-  const plain = new Set<string>()
+  const reached = new Set()
+  const plain = new Set()
   document.addEventListener('focusin', (event) => {
-    const target = event.target as HTMLElement
-    const control = target.closest<HTMLElement>(CONTROLS) ?? target
-    const name = describe(control)
+    const target = event.target
+    const name = describe(target.closest(CONTROLS) ?? target)
     if (reached.has(name)) return
     reached.add(name)
     if (look(target) === unfocused.get(name)) plain.add(name)
   })
   // Tab enters a group of radio buttons once, at its chosen one; the arrow keys move within it.
-  const radioGroupReached = (element: HTMLElement) =>
+  const radioGroupReached = (element) =>
     element instanceof HTMLInputElement &&
     element.type === 'radio' &&
-    [...reached].some((name) => name.startsWith(`input(radio:${element.name})`))
-  ;(globalThis as Record<string, unknown>).focusReport = () => ({
+    [...reached].some((name) => name.startsWith('input(radio:' + element.name + ')'))
+  globalThis.focusReport = () => ({
     missed: collect()
       .filter((element) => !reached.has(describe(element)) && !radioGroupReached(element))
       .map(describe),
     plain: [...plain],
   })
   return controls.length
-}
+})()`
 
 /** Opens a screen afresh, waits until it has read what it shows, and starts noting focus. */
 async function open(page: Page, screen: Screen) {
   await page.goto(`${suite.app.url}${screen.path(ids)}`)
   await page.locator(screen.ready).first().waitFor()
   await page.waitForLoadState('networkidle')
-  // Start from the top of the document, as a person arriving on the page does.
-  await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur())
-  return page.evaluate(watchFocus)
+  // Start from the top of the document with nothing focused, as a person arriving on the page does (the sign-in
+  // page focuses its first field), once Vuetify has drawn that field as unfocused again.
+  await page.evaluate('document.activeElement?.blur()')
+  await page.locator('.v-field--focused').waitFor({ state: 'detached' })
+  return page.evaluate<number>(WATCH_FOCUS)
 }
 
 /** Presses Tab at most twice per control (and a few more), stopping once every control has had focus. */
@@ -140,8 +135,7 @@ async function tabThrough(page: Page, controls: number) {
   return report(page)
 }
 
-const report = (page: Page) =>
-  page.evaluate(() => (globalThis as unknown as { focusReport(): { missed: string[]; plain: string[] } }).focusReport())
+const report = (page: Page) => page.evaluate<{ missed: string[]; plain: string[] }>('globalThis.focusReport()')
 
 describe('the keyboard alone reaches every control, and focus shows where it is', () => {
   for (const [who, email] of [

@@ -44,23 +44,26 @@ beforeAll(async () => {
   linesetId = set.id
 })
 
-/** Where the diagram's drawing and its content sit, in CSS pixels, with the page laid out for print. */
-function measureDiagram(page: Page) {
-  return page.locator('[data-testid=hang-pictures] [data-testid=batten-diagram] svg').evaluate((node) => {
-    const svg = node as SVGSVGElement
-    const box = svg.getBoundingClientRect()
-    const content = svg.getBBox()
-    const view = svg.viewBox.baseVal
-    return {
-      left: box.left,
-      right: box.right,
-      pageWidth: document.documentElement.scrollWidth,
-      contentLeft: content.x,
-      contentRight: content.x + content.width,
-      viewWidth: view.width,
-    }
-  })
-}
+/**
+ * Where the diagram's drawing and its content sit, in CSS pixels, with the page laid out for print. Script text,
+ * not a function: this file compiles for Node, without the browser's types.
+ */
+const MEASURE_DIAGRAM = `(() => {
+  const svg = document.querySelector('[data-testid=hang-pictures] [data-testid=batten-diagram] svg')
+  const box = svg.getBoundingClientRect()
+  const content = svg.getBBox()
+  return {
+    left: box.left,
+    right: box.right,
+    pageWidth: document.documentElement.scrollWidth,
+    contentLeft: content.x,
+    contentRight: content.x + content.width,
+    viewWidth: svg.viewBox.baseVal.width,
+  }
+})()`
+
+type DiagramPlace = Record<'left' | 'right' | 'pageWidth' | 'contentLeft' | 'contentRight' | 'viewWidth', number>
+const measureDiagram = (page: Page) => page.evaluate<DiagramPlace>(MEASURE_DIAGRAM)
 
 describe('printing the lineset page', () => {
   for (const paper of PAPERS) {

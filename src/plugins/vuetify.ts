@@ -5,8 +5,8 @@ import '../styles/print.css'
 import 'vuetify/styles/core'
 import 'vuetify/styles/utilities'
 import { createVuetify } from 'vuetify'
-import { aliases } from 'vuetify/iconsets/mdi-svg'
 import { pathIcons } from './icons/pathIcons'
+import { vuetifyAliases } from './icons/vuetifyAliases'
 
 /**
  * Loftledger's own light palette: deep slate for structure, brass for actions that matter. Every colour reads at
@@ -30,8 +30,8 @@ export const loftledgerTheme = {
 }
 
 export default createVuetify({
-  // Vuetify's own icons ($close, $dropdown, ...) come as SVG paths; the views' `mdi-...` names go through the map.
-  icons: { defaultSet: 'paths', aliases, sets: { paths: pathIcons } },
+  // Vuetify's own icons ($close, $dropdown, ...) come as SVG paths (only those its components here ask for); the views' `mdi-...` names go through the map.
+  icons: { defaultSet: 'paths', aliases: vuetifyAliases, sets: { paths: pathIcons } },
   theme: { defaultTheme: 'loftledger', themes: { loftledger: loftledgerTheme } },
   defaults: {
     VTextField: { variant: 'outlined', density: 'comfortable' },

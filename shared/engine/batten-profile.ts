@@ -1,10 +1,11 @@
 import { Dec } from '../units/index.js'
 import type { Decimal } from 'decimal.js'
 import type { CalculationInput } from '../schemas/calculation.js'
-import { buildBattenModel } from './batten-model.js'
+import { buildBattenModel, type BattenLoads } from './batten-model.js'
 import { solveContinuousBeam } from './continuous-beam.js'
 import { resolvePipe } from './pipe-properties.js'
 import { deflectionConverter } from './structural-units.js'
+import { solveTensionOnly } from './tension-only.js'
 
 /** One place along the batten: its bending moment (sagging positive) and, when the pipe is known, its drop. */
 export interface BattenProfileSample {
@@ -22,6 +23,8 @@ export interface BattenProfile {
   samples: BattenProfileSample[]
   /** True when `drop` is given at every sample. */
   hasShape: boolean
+  /** Positions of the lines the batten hangs from: every line, or only those still pulling when some go slack. */
+  heldLines: number[]
 }
 
 /** A downward load as the singularity functions see it: a point, or a uniform stretch. */
@@ -35,7 +38,9 @@ const positive = (value: number) => (value > 0 ? value : 0)
  * continuous-beam solution; between the lines M(x) and EI·y(x) follow from statics with Macaulay's brackets
  * (each load's term starts where it acts), and the shape is pinned to zero at the end lines; the lines between
  * land on zero because the solution already satisfies them. Samples fall evenly along the batten, plus every
- * line and point load (where the moment has its corners).
+ * line and point load (where the moment has its corners). When a line goes slack the batten hangs from the
+ * others alone (the engine's tension-only solution): the curves follow that beam, so they agree with the line
+ * loads drawn above them. A batten that tips has no such state; it keeps the rigid curves, as the engine does.
  *
  * @example
  * // a simple span of 10 under 1 per length: 0.125wL² = 12.5 at mid-span (AISC beam diagram, case 1)
@@ -46,26 +51,41 @@ export function battenProfile(input: CalculationInput, sampleCount = 160): Batte
   const { batten, units } = input
   const length = batten.length
   const loads = collectLoads(input)
-  const lines = batten.pickPoints
-  const model = buildBattenModel({
+  const { lines, reactions } = holdingLines(loads, {
     length,
-    pickPoints: lines,
+    pickPoints: batten.pickPoints,
     points: loads.flatMap((l) => (l.kind === 'point' ? [{ at: l.at, weight: l.weight }] : [])),
     spreads: loads.flatMap((l) => (l.kind === 'spread' ? [{ from: l.from, to: l.to, weightPerLength: l.w }] : [])),
   })
-  const reactions = solveContinuousBeam(model).reactions.map((r) => r.toNumber())
   const moment = (x: number) => sumTerms(x, lines, reactions, loads, 1)
-  const places = samplePlaces(length, lines, loads, sampleCount)
+  const places = samplePlaces(length, batten.pickPoints, loads, sampleCount)
   const pipe = resolvePipe(batten, units)
   const toDrop = pipe && lines.length >= 2 ? dropScale(pipe.elasticModulus, pipe.momentOfInertia, units) : undefined
-  if (!toDrop) return { length, samples: places.map((at) => ({ at, moment: moment(at) })), hasShape: false }
+  const heldLines = [...lines]
+  if (!toDrop) return { length, samples: places.map((at) => ({ at, moment: moment(at) })), hasShape: false, heldLines }
   // EI·y upward, from the double integral; a straight line through the end lines takes out the two constants.
   const rise = (x: number) => sumTerms(x, lines, reactions, loads, 3)
   const [first, last] = [lines[0]!, lines[lines.length - 1]!]
   const [riseFirst, riseLast] = [rise(first), rise(last)]
   const chord = (x: number) => riseFirst + ((riseLast - riseFirst) * (x - first)) / (last - first)
   const samples = places.map((at) => ({ at, moment: moment(at), drop: -toDrop * (rise(at) - chord(at)) }))
-  return { length, samples, hasShape: true }
+  return { length, samples, hasShape: true, heldLines }
+}
+
+/**
+ * The lines that hold the batten and what each carries: the continuous beam on every line, or, when one would
+ * push (a slack line), the beam on the lines the tension-only solution keeps.
+ */
+function holdingLines(loads: Load[], beam: BattenLoads): { lines: number[]; reactions: number[] } {
+  const rigid = solveContinuousBeam(buildBattenModel(beam)).reactions
+  const anyLoad = loads.some((l) => (l.kind === 'point' ? l.weight > 0 : l.w > 0 && l.to > l.from))
+  const slack = rigid.length >= 2 && anyLoad && rigid.some((load) => load.lte(0))
+  const held = slack ? solveTensionOnly(beam, rigid).held : undefined
+  if (!held) return { lines: [...beam.pickPoints], reactions: rigid.map((r) => r.toNumber()) }
+  return {
+    lines: held.model.supports.map((at) => at.toNumber()),
+    reactions: held.solution.reactions.map((r) => r.toNumber()),
+  }
 }
 
 /** Every downward load on the batten as the engine places it: its own weight, hardware at each line, the items. */

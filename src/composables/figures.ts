@@ -1,4 +1,5 @@
-import { displayQuantity, type Quantity, type UnitSystem } from '../../shared/units/index.js'
+import { displayQuantity } from '../../shared/units/display.js'
+import type { Quantity, UnitSystem } from '../../shared/units/systems.js'
 
 /**
  * A figure with its unit by the app's one display rule (`DISPLAY_PLACES` in shared/units), or a dash when it

@@ -1,9 +1,12 @@
 import '../styles/roboto.css'
 import '../styles/print.css'
-import 'vuetify/styles'
+// Vuetify's base and utility classes without its palette classes (bg-red-lighten-2, ...): colours here come only
+// from the theme below, so the palette (about 40 KB of CSS) never reaches a page.
+import 'vuetify/styles/core'
+import 'vuetify/styles/utilities'
 import { createVuetify } from 'vuetify'
-import { aliases } from 'vuetify/iconsets/mdi-svg'
 import { pathIcons } from './icons/pathIcons'
+import { vuetifyAliases } from './icons/vuetifyAliases'
 
 /**
  * Loftledger's own light palette: deep slate for structure, brass for actions that matter. Every colour reads at
@@ -27,8 +30,8 @@ export const loftledgerTheme = {
 }
 
 export default createVuetify({
-  // Vuetify's own icons ($close, $dropdown, ...) come as SVG paths; the views' `mdi-...` names go through the map.
-  icons: { defaultSet: 'paths', aliases, sets: { paths: pathIcons } },
+  // Vuetify's own icons ($close, $dropdown, ...) come as SVG paths (only those its components here ask for); the views' `mdi-...` names go through the map.
+  icons: { defaultSet: 'paths', aliases: vuetifyAliases, sets: { paths: pathIcons } },
   theme: { defaultTheme: 'loftledger', themes: { loftledger: loftledgerTheme } },
   defaults: {
     VTextField: { variant: 'outlined', density: 'comfortable' },

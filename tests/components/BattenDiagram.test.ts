@@ -30,6 +30,11 @@ const even = engine({
     { label: 'Special', weight: 60, at: 25 },
   ],
 })
+const MOMENT_ZERO = 250
+const SHAPE_ZERO = 340
+/** The drawn points of an SVG path made of M/L commands. */
+const pathPoints = (d: string) =>
+  [...d.matchAll(/[ML] (-?[\d.]+) (-?[\d.]+)/g)].map((m) => ({ x: Number(m[1]), y: Number(m[2]) }))
 const arrowXs = (w: VueWrapper) => w.findAll('[data-diagram-arrow]').map((arrow) => Number(arrow.attributes('data-x')))
 
 describe('BattenDiagram', () => {
@@ -72,6 +77,29 @@ describe('BattenDiagram', () => {
     expect(wrapper.get('[data-testid="diagram-line-1"]').text()).toContain(
       `${middle.toLocaleString('en-US', { maximumFractionDigits: 2 })} lb`,
     )
+  })
+
+  it('when a line goes slack, then the moment and the shape follow the batten on the lines still holding', () => {
+    // The same lifted batten: without its far line it hangs from two lines with the last 10 ft overhanging, so the
+    // shape rises at the slack line instead of being pinned to it, and the moment over the middle line is only
+    // the overhang's own weight (wL²/2, common practice) rather than the three-line beam's -3/32 PL.
+    const lifted = engine({ length: 20, pickPoints: [0, 10, 20], items: [{ label: 'Truss', weight: 320, at: 5 }] })
+    wrapper = mountWithApp(BattenDiagram, { props: lifted })
+    const xs = [0, 10, 20].map((at) => DIAGRAM.left + ((DIAGRAM.right - DIAGRAM.left) * at) / 20)
+    const shape = pathPoints(wrapper.get('[data-testid="diagram-shape"]').attributes('d')!)
+    const shapeAt = (x: number) => shape.find((p) => Math.abs(p.x - x) < 0.01)!.y
+    expect(shapeAt(xs[0]!)).toBeCloseTo(SHAPE_ZERO, 1)
+    expect(shapeAt(xs[1]!)).toBeCloseTo(SHAPE_ZERO, 1)
+    // Up is smaller y: the batten lifts off the slack line.
+    expect(shapeAt(xs[2]!)).toBeLessThan(SHAPE_ZERO - 5)
+    const moment = pathPoints(wrapper.get('[data-testid="diagram-moment"]').attributes('d')!)
+    const depth = (p: { y: number }) => Math.abs(p.y - MOMENT_ZERO)
+    const deepest = Math.max(...moment.map(depth))
+    const overMiddle = depth(moment.find((p) => Math.abs(p.x - xs[1]!) < 0.01)!)
+    // Held on two lines: 2.72 lb/ft × 10² / 2 = 136 lb·ft hogging against 766 sagging (ratio ~0.18); the
+    // rigid three-line beam would have 300 against 650 (~0.46). NPS 1½ schedule 40 weighs 2.72 lb/ft (source: ASME B36.10M).
+    expect(overMiddle / deepest).toBeLessThan(0.3)
+    expect(lifted.result.moment.max).toBeGreaterThan(700)
   })
 
   it('when the tension-only figures name a slack line, then that line is drawn slack with their load', () => {

@@ -21,7 +21,7 @@ import { brickStockRoutes } from './modules/brick-stock/brick-stock.routes.js'
 import { lockoutRoutes } from './modules/lockouts/lockout.routes.js'
 import { brickTypeRoutes } from './modules/brick-types/brick-type.routes.js'
 import type { CalculationPool } from './modules/calculations/calculation-pool.js'
-import { calculationRoutes } from './modules/calculations/calculation.routes.js'
+import { calculationBodyAsText, calculationRoutes } from './modules/calculations/calculation.routes.js'
 import { itemTypeRoutes } from './modules/item-types/item-type.routes.js'
 import { hangRoutes } from './modules/hangs/hang.routes.js'
 import { invitationRoutes } from './modules/invitations/invitation.routes.js'
@@ -74,6 +74,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
   app.use(securityHeaders(config))
 
   const api = express.Router()
+  api.use('/calculations', calculationBodyAsText)
   api.use(express.json({ limit: '1mb' }))
   api.use(...sessions.middleware)
   api.use(passport.initialize())

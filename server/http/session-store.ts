@@ -56,7 +56,9 @@ export class SessionStore extends PgStore {
   override get(sid: string, callback: (error: unknown, session?: session.SessionData | null) => void) {
     // The disabled touch of the store's own class does one thing still worth doing: start its pruning timer.
     PgStore.prototype.touch.call(this, sid, {} as session.SessionData, () => {})
-    this.pool.query<SessionRow>(SESSION_WITH_MEMBER, [sid, Date.now() / 1000]).then(({ rows: [row] }) => {
+    // Named: each pooled connection parses and plans the query once, then only binds and runs it.
+    const query = { name: 'session-with-member', text: SESSION_WITH_MEMBER, values: [sid, Date.now() / 1000] }
+    this.pool.query<SessionRow>(query).then(({ rows: [row] }) => {
       if (!row) return callback(null, null)
       const key = row.sess.passport?.user
       if (key)

@@ -58,4 +58,40 @@ describe('POST /api/v1/calculations', () => {
     expect(res.body.error.code).toBe('validation_failed')
     expect(Object.keys(res.body.error.fields)).toContain(field)
   })
+
+  // The body reaches the calculation thread as JSON text: it is read there as the API's JSON reader reads it.
+  const sendText = (contentType: string, text: string) =>
+    flyOperator.agent
+      .post('/api/v1/calculations')
+      .set('X-CSRF-Token', flyOperator.csrfToken)
+      .set('content-type', contentType)
+      .send(text)
+
+  it.each([
+    ['cut short', '{"units": "imperial",'],
+    ['a bare string at the top', '"imperial"'],
+    ['a bare number at the top', '  42'],
+  ])('when the body is %s, then it answers 400 malformed_json', async (_, text) => {
+    const res = await sendText('application/json', text)
+    expect(res.status).toBe(400)
+    expect(res.body.error.code).toBe('malformed_json')
+  })
+
+  it('when the JSON comes with a charset and spaces around it, then it is answered as the same JSON would be', async () => {
+    const res = await sendText('application/json; charset=utf-8', `\n  ${JSON.stringify(twoSpans)}  \n`)
+    expect(res.status).toBe(200)
+    expect(res.headers['content-type']).toMatch(/^application\/json/)
+    expect(res.body.counterweight.ratio).toBe(1)
+  })
+
+  it('when the body is empty or not JSON at all, then it answers 400 naming the missing fields', async () => {
+    for (const [type, text] of [
+      ['application/json', ''],
+      ['text/plain', JSON.stringify(twoSpans)],
+    ]) {
+      const res = await sendText(type!, text!)
+      expect(res.status, type).toBe(400)
+      expect(res.body.error.code, type).toBe('validation_failed')
+    }
+  })
 })

@@ -1,9 +1,11 @@
 import { Worker } from 'node:worker_threads'
 import type { runCalculation } from '../../../shared/engine/calculate.js'
 import { AppError } from '../../http/errors.js'
+import type { CalculationAnswer } from './calculation-answer.js'
 import type { CalculationJob, CalculationReply } from './calculation.worker.js'
 
 type Outcome = ReturnType<typeof runCalculation>
+type Settle = { resolve(value: Outcome | CalculationAnswer): void; reject(error: Error): void }
 
 /**
  * Calculations waiting or running at once. Each is bounded (the schema's ranges and the engine's work limits keep
@@ -16,6 +18,8 @@ export const MAX_WAITING_CALCULATIONS = 32
 export interface CalculationPool {
   /** Runs the engine on a raw body on the calculation thread. */
   run(body: unknown): Promise<Outcome>
+  /** Runs the engine on a request's JSON text on the calculation thread; a result comes back as JSON text. */
+  answer(text: string): Promise<CalculationAnswer>
   /** Calculations sent to the thread and not yet answered. */
   waiting(): number
   /** Tests: the thread waits before its next job until `release`, so a calculation stays in flight. */
@@ -36,7 +40,7 @@ export interface CalculationPool {
 export function createCalculationPool(): CalculationPool {
   const gate = new Int32Array(new SharedArrayBuffer(4))
   Atomics.store(gate, 0, 1)
-  const pending = new Map<number, { resolve(outcome: Outcome): void; reject(error: Error): void }>()
+  const pending = new Map<number, Settle>()
   let worker: Worker | null = null
   let nextId = 1
 
@@ -55,7 +59,7 @@ export function createCalculationPool(): CalculationPool {
       pending.delete(reply.id)
       if (pending.size === 0) thread.unref()
       if ('fault' in reply) job?.reject(new Error(`calculation failed: ${reply.fault}`))
-      else job?.resolve(reply.outcome)
+      else job?.resolve('answer' in reply ? reply.answer : reply.outcome)
     })
     const lost = (error: Error) => {
       if (worker === thread) worker = null
@@ -66,22 +70,23 @@ export function createCalculationPool(): CalculationPool {
     return thread
   }
 
+  function send<T extends Outcome | CalculationAnswer>(job: CalculationJob): Promise<T> {
+    if (pending.size >= MAX_WAITING_CALCULATIONS)
+      return Promise.reject(
+        new AppError(503, 'calculations_busy', 'Too many calculations are waiting; try again in a moment'),
+      )
+    worker ??= start()
+    // A thread with work keeps the process alive until it answers; an idle one never does.
+    worker.ref()
+    return new Promise<T>((resolve, reject) => {
+      pending.set(job.id, { resolve: resolve as Settle['resolve'], reject })
+      worker!.postMessage(job)
+    })
+  }
+
   return {
-    run(body) {
-      if (pending.size >= MAX_WAITING_CALCULATIONS)
-        return Promise.reject(
-          new AppError(503, 'calculations_busy', 'Too many calculations are waiting; try again in a moment'),
-        )
-      worker ??= start()
-      const id = nextId++
-      const job: CalculationJob = { id, body }
-      // A thread with work keeps the process alive until it answers; an idle one never does.
-      worker.ref()
-      return new Promise<Outcome>((resolve, reject) => {
-        pending.set(id, { resolve, reject })
-        worker!.postMessage(job)
-      })
-    },
+    run: (body) => send<Outcome>({ id: nextId++, body }),
+    answer: (text) => send<CalculationAnswer>({ id: nextId++, text }),
     waiting: () => pending.size,
     hold: () => Atomics.store(gate, 0, 0),
     release() {

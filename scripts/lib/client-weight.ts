@@ -1,21 +1,10 @@
 // What `npm run bench:client` measures in Chromium: bytes over the wire and the sign-in page's time to interactive.
 import { chromium, type Browser, type CDPSession, type Page } from 'playwright-core'
+import { chromiumLaunchOptions } from './chromium.js'
 
 /** Debian's Chromium, headless, kept off the network; every measurement opens a fresh context (empty cache). */
 export function launchBenchChromium(): Promise<Browser> {
-  return chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  })
+  return chromium.launch(chromiumLaunchOptions())
 }
 
 export interface WireFigures {

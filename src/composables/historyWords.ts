@@ -1,5 +1,6 @@
 import type { Quantity, UnitSystem } from '../../shared/units/index.js'
 import { formatFigure } from './figures'
+import { dayAndTime } from './moments'
 
 const SECOND = 1000
 // Each step: up to how many milliseconds it is used, and the unit it counts in.
@@ -27,15 +28,7 @@ export function timeInWords(iso: string, { now = new Date(), timeZone }: { now?:
   const elapsed = now.getTime() - when.getTime()
   const [, unit, size] = STEPS.find(([limit]) => Math.abs(elapsed) < limit)!
   const ago = Math.abs(elapsed) < 45 * SECOND ? 'just now' : relative.format(-Math.round(elapsed / size), unit)
-  const at = when.toLocaleString('en-GB', {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    hour: '2-digit',
-    minute: '2-digit',
-    timeZone,
-  })
-  return { ago, at }
+  return { ago, at: dayAndTime(when, timeZone) }
 }
 
 /**

@@ -1,3 +1,4 @@
+import { dayAndTime } from './moments'
 import { OUTBOX_STATE_LABELS, type OutboxState } from '../../shared/schemas/index.js'
 
 /** Each delivery state in words, with an icon and a colour beside them (never the colour alone). */
@@ -8,11 +9,4 @@ export const OUTBOX_STATE_LOOKS: Readonly<Record<OutboxState, { label: string; i
 }
 
 /** A moment as the outbox shows it: day, month, year and time of day, in the reader's own zone. */
-export const outboxMoment = (iso: string) =>
-  new Date(iso).toLocaleString('en-GB', {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    hour: '2-digit',
-    minute: '2-digit',
-  })
+export const outboxMoment = (iso: string) => dayAndTime(iso)

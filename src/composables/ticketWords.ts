@@ -1,5 +1,6 @@
 import type { TicketView } from '../../shared/schemas/index.js'
 import { displayQuantity } from '../../shared/units/display.js'
+import { dayAndTime } from './moments'
 
 /** "4 × Full on, 2 × Half off", or a sentence when no brick moves. */
 export function ticketChangeWords(changes: TicketView['changes']): string {
@@ -17,11 +18,4 @@ export function expectedBalanceWords(ticket: Pick<TicketView, 'expectedOutOfBala
 }
 
 /** A moment as tickets show it: day, month, year and time of day, in the reader's own zone. */
-export const ticketMoment = (iso: string) =>
-  new Date(iso).toLocaleString('en-GB', {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    hour: '2-digit',
-    minute: '2-digit',
-  })
+export const ticketMoment = (iso: string) => dayAndTime(iso)

@@ -1,8 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { BrickStockLine } from '../../shared/schemas/arbor.js'
 import { databaseFingerprint } from '../support/database-fingerprint.js'
-import { sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
-import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import { sampleLineset, type VenueFixture } from '../support/fixtures.js'
+import { signedIn, type Client, type TestApp } from '../support/test-app.js'
+import { startTwoVenues } from '../support/venue-suite.js'
 
 // The fixture's brick type "Full" weighs 20 lb and the house owns 100 (invented test data).
 let app: TestApp
@@ -14,13 +15,12 @@ let stageManager: Client
 let otherVenue: Client
 
 beforeAll(async () => {
-  app = await startTestApp()
-  alpha = await seedVenue(app.handle.context, 'alpha')
-  beta = await seedVenue(app.handle.context, 'beta')
-  director = await signedIn(app.url, alpha.emails['technical-director'])
-  operator = await signedIn(app.url, alpha.emails['fly-operator'])
-  stageManager = await signedIn(app.url, alpha.emails['stage-manager'])
-  otherVenue = await signedIn(app.url, beta.emails.administrator)
+  const venues = await startTwoVenues()
+  ;({ app, alpha, beta } = venues)
+  director = venues.atAlpha['technical-director']
+  operator = venues.atAlpha['fly-operator']
+  stageManager = venues.atAlpha['stage-manager']
+  otherVenue = venues.atBeta.administrator
 })
 afterAll(() => app.stop())
 

@@ -1,21 +1,18 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { seedVenue, type VenueFixture } from '../support/fixtures.js'
-import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import type { Client, TestApp } from '../support/test-app.js'
+import { startTwoVenues } from '../support/venue-suite.js'
 
 let app: TestApp
-let alpha: VenueFixture
-let beta: VenueFixture
 let operator: Client
 let stageManager: Client
 let otherVenue: Client
 
 beforeAll(async () => {
-  app = await startTestApp()
-  alpha = await seedVenue(app.handle.context, 'alpha')
-  beta = await seedVenue(app.handle.context, 'beta', 'metric')
-  operator = await signedIn(app.url, alpha.emails['fly-operator'])
-  stageManager = await signedIn(app.url, alpha.emails['stage-manager'])
-  otherVenue = await signedIn(app.url, beta.emails.administrator)
+  const venues = await startTwoVenues('metric')
+  app = venues.app
+  operator = venues.atAlpha['fly-operator']
+  stageManager = venues.atAlpha['stage-manager']
+  otherVenue = venues.atBeta.administrator
 })
 afterAll(() => app.stop())
 

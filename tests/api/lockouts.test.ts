@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { databaseFingerprint } from '../support/database-fingerprint.js'
-import { sampleLineset, seedVenue, type VenueFixture } from '../support/fixtures.js'
-import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import { sampleLineset, type VenueFixture } from '../support/fixtures.js'
+import type { Client, TestApp } from '../support/test-app.js'
+import { startTwoVenues } from '../support/venue-suite.js'
 
 let app: TestApp
 let alpha: VenueFixture
@@ -12,14 +13,13 @@ let stageManager: Client
 let otherVenue: Client
 
 beforeAll(async () => {
-  app = await startTestApp()
-  alpha = await seedVenue(app.handle.context, 'alpha')
-  const beta = await seedVenue(app.handle.context, 'beta')
-  director = await signedIn(app.url, alpha.emails['technical-director'])
-  administrator = await signedIn(app.url, alpha.emails.administrator)
-  operator = await signedIn(app.url, alpha.emails['fly-operator'])
-  stageManager = await signedIn(app.url, alpha.emails['stage-manager'])
-  otherVenue = await signedIn(app.url, beta.emails.administrator)
+  const venues = await startTwoVenues()
+  ;({ app, alpha } = venues)
+  director = venues.atAlpha['technical-director']
+  administrator = venues.atAlpha.administrator
+  operator = venues.atAlpha['fly-operator']
+  stageManager = venues.atAlpha['stage-manager']
+  otherVenue = venues.atBeta.administrator
 })
 afterAll(() => app.stop())
 

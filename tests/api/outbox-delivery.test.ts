@@ -2,8 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { queueMail } from '../../server/modules/outbox/outbox.service.js'
 import { seedVenue, type VenueFixture } from '../support/fixtures.js'
 import { Mailbox } from '../support/mailbox.js'
-import { movableClock, outboxRows, queueMessages } from '../support/outbox.js'
-import { TcpProxy } from '../support/tcp-proxy.js'
+import { mailOutageSuite, movableClock, outboxRows, queueMessages } from '../support/outbox.js'
 import { signedIn, startTestApp, type TestApp } from '../support/test-app.js'
 
 const invite = (email: string) => ({ email, name: 'New hand', role: 'fly-operator' })
@@ -65,49 +64,30 @@ describe('mail written with the change that causes it', () => {
 
 describe('a mail server that is down', () => {
   const clock = movableClock()
-  let sink: Mailbox
-  let proxy: TcpProxy
-  let app: TestApp
-  let venue: VenueFixture
-  beforeAll(async () => {
-    sink = await Mailbox.open()
-    proxy = new TcpProxy('127.0.0.1', sink.port)
-    await proxy.open()
-    app = await startTestApp({
-      env: { SMTP_URL: `smtp://127.0.0.1:${proxy.port}?ignoreTLS=true`, MAIL_SWEEP_INTERVAL_MS: '20' },
-      overrides: { clock },
-    })
-    sink.settle = () => app.handle.context.outbox.idle()
-    venue = await seedVenue(app.handle.context, 'alpha')
-  })
-  afterAll(async () => {
-    await app.stop()
-    await proxy.cut()
-    await sink.close()
-  })
+  const outage = mailOutageSuite(clock)
 
   it('when the mail server cannot be reached, then the invitation still commits, its message waits with the error, and it is delivered once the server is back', async () => {
-    const admin = await signedIn(app.url, venue.emails.administrator)
-    await proxy.cut()
+    const admin = await signedIn(outage.app.url, outage.venue.emails.administrator)
+    await outage.proxy.cut()
     const sent = await admin.post('/api/v1/people', invite('outage@alpha.test'))
     expect(sent.status).toBe(201)
-    expect(await app.handle.db.models.Invitation.count({ where: { id: sent.body.id } })).toBe(1)
-    await app.handle.context.outbox.idle()
-    const [row] = await app.handle.db.models.Outbox.findAll({ where: { causeId: sent.body.id } })
+    expect(await outage.app.handle.db.models.Invitation.count({ where: { id: sent.body.id } })).toBe(1)
+    await outage.app.handle.context.outbox.idle()
+    const [row] = await outage.app.handle.db.models.Outbox.findAll({ where: { causeId: sent.body.id } })
     expect(row).toMatchObject({ state: 'waiting', attempts: 1 })
     expect(row!.lastError).toMatch(/ECONNREFUSED/)
     // The first retry waits 30 s (MAIL_RETRY_FIRST_SECONDS' default) from the failed attempt.
     expect(row!.nextAttemptAt.getTime() - clock.now().getTime()).toBe(30_000)
-    expect(await sink.allTo('outage@alpha.test')).toEqual([])
+    expect(await outage.sink.allTo('outage@alpha.test')).toEqual([])
 
-    await proxy.open()
+    await outage.proxy.open()
     clock.advance(30)
     // The sweep (every 20 ms here) finds the message due: wait for its state, not for a time.
     await expect.poll(async () => (await row!.reload()).state, { timeout: 15_000, interval: 20 }).toBe('sent')
     expect(row).toMatchObject({ attempts: 2, lastError: null })
-    const delivered = await sink.latestTo('outage@alpha.test')
+    const delivered = await outage.sink.latestTo('outage@alpha.test')
     expect(delivered.text).toMatch(/\/invitation\/[A-Za-z0-9_-]+/)
-    expect(await sink.allTo('outage@alpha.test')).toHaveLength(1)
+    expect(await outage.sink.allTo('outage@alpha.test')).toHaveLength(1)
   })
 })
 

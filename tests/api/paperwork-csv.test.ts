@@ -1,8 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { readCsvText } from '../../shared/paperwork/csv-read.js'
 import { guessMapping, readImportRows } from '../../shared/paperwork/hang-import.js'
-import { seedVenue, type VenueFixture } from '../support/fixtures.js'
-import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import type { VenueFixture } from '../support/fixtures.js'
+import type { Client, TestApp } from '../support/test-app.js'
+import { loadSampleArbor } from '../support/tickets.js'
+import { startTwoVenues } from '../support/venue-suite.js'
 
 // Invented test data: an imperial venue (alpha) and a metric one (beta), each hanging an electric.
 let app: TestApp
@@ -32,24 +34,17 @@ async function saveElectric(client: Client, linesetId: string, unitSystem: 'impe
 }
 
 beforeAll(async () => {
-  app = await startTestApp()
-  alpha = await seedVenue(app.handle.context, 'alpha')
-  beta = await seedVenue(app.handle.context, 'beta', 'metric')
-  operator = await signedIn(app.url, alpha.emails['fly-operator'])
-  director = await signedIn(app.url, alpha.emails['technical-director'])
-  stageManager = await signedIn(app.url, alpha.emails['stage-manager'])
-  metricOperator = await signedIn(app.url, beta.emails['fly-operator'])
+  const venues = await startTwoVenues('metric')
+  ;({ app, alpha, beta } = venues)
+  operator = venues.atAlpha['fly-operator']
+  director = venues.atAlpha['technical-director']
+  stageManager = venues.atAlpha['stage-manager']
+  metricOperator = venues.atBeta['fly-operator']
   const saved = await saveElectric(operator, alpha.linesetId, 'imperial')
   hangId = saved.id
   totalLoad = saved.totalLoad
   await saveElectric(metricOperator, beta.linesetId, 'metric')
-  const arbor = (await director.get(`/api/v1/linesets/${alpha.linesetId}/arbor`).expect(200)).body
-  await director
-    .put(`/api/v1/linesets/${alpha.linesetId}/arbor`, {
-      version: arbor.version,
-      bricks: [{ brickTypeId: alpha.brickTypeId, count: 26 }],
-    })
-    .expect(200)
+  await loadSampleArbor(director, alpha, 26)
 })
 afterAll(() => app.stop())
 

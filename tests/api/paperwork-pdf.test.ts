@@ -3,8 +3,10 @@ import jsQRModule from 'jsqr'
 import { PDFParse } from 'pdf-parse'
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { BALANCE_CAUTIONS } from '../../shared/engine/cautions.js'
-import { seedVenue, type VenueFixture } from '../support/fixtures.js'
-import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import type { VenueFixture } from '../support/fixtures.js'
+import type { Client, TestApp } from '../support/test-app.js'
+import { loadSampleArbor } from '../support/tickets.js'
+import { startTwoVenues } from '../support/venue-suite.js'
 
 // Invented test data: the sample lineset (arbor 90 lb empty, 110 lb of pipe weight aboard, rated 1,000 lb,
 // arbor capacity 2,000 lb) hung with a 25 lb piece and a 0.5 lb/ft cable, in an imperial and a metric venue.
@@ -26,32 +28,18 @@ const hang = (unitSystem: 'imperial' | 'metric') => ({
   unitSystem,
 })
 
-async function countArbor(client: Client, venue: VenueFixture, count: number) {
-  const arbor = (await client.get(`/api/v1/linesets/${venue.linesetId}/arbor`).expect(200)).body
-  await client
-    .put(`/api/v1/linesets/${venue.linesetId}/arbor`, {
-      version: arbor.version,
-      bricks: [{ brickTypeId: venue.brickTypeId, count }],
-    })
-    .expect(200)
-}
-
 beforeAll(async () => {
-  app = await startTestApp()
-  alpha = await seedVenue(app.handle.context, 'alpha')
-  beta = await seedVenue(app.handle.context, 'beta', 'metric')
-  operator = await signedIn(app.url, alpha.emails['fly-operator'])
-  director = await signedIn(app.url, alpha.emails['technical-director'])
-  stageManager = await signedIn(app.url, alpha.emails['stage-manager'])
-  metricOperator = await signedIn(app.url, beta.emails['fly-operator'])
+  const venues = await startTwoVenues('metric')
+  ;({ app, alpha, beta } = venues)
+  operator = venues.atAlpha['fly-operator']
+  director = venues.atAlpha['technical-director']
+  stageManager = venues.atAlpha['stage-manager']
+  metricOperator = venues.atBeta['fly-operator']
+  const metricDirector = venues.atBeta['technical-director']
   const saved = (await operator.post(`/api/v1/linesets/${alpha.linesetId}/hangs`, hang('imperial')).expect(201)).body
-  await (
-    await signedIn(app.url, beta.emails['technical-director'])
-  )
-    .post(`/api/v1/linesets/${beta.linesetId}/hangs`, hang('metric'))
-    .expect(201)
-  await countArbor(director, alpha, 2)
-  await countArbor(await signedIn(app.url, beta.emails['technical-director']), beta, 3)
+  await metricDirector.post(`/api/v1/linesets/${beta.linesetId}/hangs`, hang('metric')).expect(201)
+  await loadSampleArbor(director, alpha, 2)
+  await loadSampleArbor(metricDirector, beta, 3)
   const ticket = (await operator.post('/api/v1/tickets', { hangId: saved.id }).expect(201)).body
   await director.post(`/api/v1/tickets/${ticket.id}/approve`, { version: ticket.version }).expect(200)
 })

@@ -1,9 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import type { LatestPreRunCheck, PreRunCheck } from '../../shared/schemas/board.js'
 import { openEventStream, sessionCookie } from '../support/event-stream.js'
-import { seedVenue, type VenueFixture } from '../support/fixtures.js'
-import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import type { VenueFixture } from '../support/fixtures.js'
+import type { Client, TestApp } from '../support/test-app.js'
 import { hungLineset } from '../support/tickets.js'
+import { startTwoVenues } from '../support/venue-suite.js'
 
 let app: TestApp
 let alpha: VenueFixture
@@ -13,13 +14,12 @@ let stageManager: Client
 let betaManager: Client
 
 beforeAll(async () => {
-  app = await startTestApp()
-  alpha = await seedVenue(app.handle.context, 'alpha')
-  const beta = await seedVenue(app.handle.context, 'beta')
-  director = await signedIn(app.url, alpha.emails['technical-director'])
-  operator = await signedIn(app.url, alpha.emails['fly-operator'])
-  stageManager = await signedIn(app.url, alpha.emails['stage-manager'])
-  betaManager = await signedIn(app.url, beta.emails['stage-manager'])
+  const venues = await startTwoVenues()
+  ;({ app, alpha } = venues)
+  director = venues.atAlpha['technical-director']
+  operator = venues.atAlpha['fly-operator']
+  stageManager = venues.atAlpha['stage-manager']
+  betaManager = venues.atBeta['stage-manager']
 })
 afterAll(() => app.stop())
 

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
-import { seedVenue, type VenueFixture } from '../support/fixtures.js'
-import { signedIn, startTestApp, type Client, type TestApp } from '../support/test-app.js'
+import type { VenueFixture } from '../support/fixtures.js'
+import type { Client, TestApp } from '../support/test-app.js'
+import { startTwoVenues } from '../support/venue-suite.js'
 import { databaseFingerprint } from '../support/database-fingerprint.js'
 import { hungLineset, operatingStatusOf, saveRevision, stockLine } from '../support/tickets.js'
 
@@ -8,7 +9,6 @@ import { hungLineset, operatingStatusOf, saveRevision, stockLine } from '../supp
 // of them, leaving 8.8 lb batten heavy (see tests/support/tickets.ts; invented test data).
 let app: TestApp
 let alpha: VenueFixture
-let beta: VenueFixture
 let admin: Client
 let director: Client
 let operator: Client
@@ -16,14 +16,13 @@ let stageManager: Client
 let otherVenue: Client
 
 beforeAll(async () => {
-  app = await startTestApp()
-  alpha = await seedVenue(app.handle.context, 'alpha')
-  beta = await seedVenue(app.handle.context, 'beta')
-  admin = await signedIn(app.url, alpha.emails.administrator)
-  director = await signedIn(app.url, alpha.emails['technical-director'])
-  operator = await signedIn(app.url, alpha.emails['fly-operator'])
-  stageManager = await signedIn(app.url, alpha.emails['stage-manager'])
-  otherVenue = await signedIn(app.url, beta.emails['fly-operator'])
+  const venues = await startTwoVenues()
+  ;({ app, alpha } = venues)
+  admin = venues.atAlpha.administrator
+  director = venues.atAlpha['technical-director']
+  operator = venues.atAlpha['fly-operator']
+  stageManager = venues.atAlpha['stage-manager']
+  otherVenue = venues.atBeta['fly-operator']
 })
 afterAll(() => app.stop())
 

@@ -1,4 +1,5 @@
 import { chromium, type BrowserContext } from 'playwright-core'
+import { chromiumLaunchOptions } from '../../scripts/lib/chromium.js'
 
 export interface TestChromium {
   /** One context for tests that need no more. */
@@ -14,19 +15,7 @@ export interface TestChromium {
 
 /** Debian's Chromium, headless, with the flags that keep it off the network; Playwright gives it a fresh profile. */
 export async function launchChromium(): Promise<TestChromium> {
-  const browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  })
+  const browser = await chromium.launch(chromiumLaunchOptions())
   const newContext = async () => {
     const context = await browser.newContext({ viewport: { width: 1440, height: 900 } })
     // Every wait is for a state (a locator, a response); this only bounds how long a slow, busy machine may take.

@@ -1,5 +1,5 @@
 import type { BrickStockLine } from '../../shared/schemas/arbor.js'
-import { sampleLineset } from './fixtures.js'
+import { sampleLineset, type VenueFixture } from './fixtures.js'
 import type { Client } from './test-app.js'
 
 // The sample lineset (40 ft batten at 2.72 lb/ft, arbor 90 lb empty with 110 lb of pipe weight aboard) with the
@@ -35,4 +35,15 @@ export async function stockLine(client: Client, brickTypeId: string) {
 export async function operatingStatusOf(client: Client, linesetId: string) {
   return ((await client.get(`/api/v1/linesets/${linesetId}`).expect(200)).body as { operatingStatus: string })
     .operatingStatus
+}
+
+/** Puts `count` of the venue's brick type on its sample lineset's arbor, at the version the arbor is read at. */
+export async function loadSampleArbor(client: Client, venue: VenueFixture, count: number) {
+  const arbor = (await client.get(`/api/v1/linesets/${venue.linesetId}/arbor`).expect(200)).body
+  await client
+    .put(`/api/v1/linesets/${venue.linesetId}/arbor`, {
+      version: arbor.version,
+      bricks: [{ brickTypeId: venue.brickTypeId, count }],
+    })
+    .expect(200)
 }

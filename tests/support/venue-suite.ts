@@ -1,5 +1,6 @@
 import { afterAll, beforeAll } from 'vitest'
-import type { Role } from '../../shared/schemas/role.js'
+import { ROLES, type Role } from '../../shared/schemas/role.js'
+import type { UnitSystem } from '../../shared/units/systems.js'
 import { seedVenue, type VenueFixture } from './fixtures.js'
 import { signedIn, startTestApp, type Client, type TestApp } from './test-app.js'
 
@@ -16,4 +17,30 @@ export function venueSuite(role: Role = 'administrator', key = 'alpha') {
   })
   afterAll(() => suite.app?.stop())
   return suite
+}
+
+/** Two venues on one real server, and a client signed in as each member of each. */
+export interface TwoVenues {
+  app: TestApp
+  alpha: VenueFixture
+  beta: VenueFixture
+  atAlpha: Record<Role, Client>
+  atBeta: Record<Role, Client>
+}
+
+/**
+ * For an API test file that works in venue alpha (imperial) and checks what venue beta (in `betaUnits`) sees:
+ * the real server on a database of its own, both venues seeded, and every member of each signed in.
+ */
+export async function startTwoVenues(betaUnits: UnitSystem = 'imperial'): Promise<TwoVenues> {
+  const app = await startTestApp()
+  const alpha = await seedVenue(app.handle.context, 'alpha')
+  const beta = await seedVenue(app.handle.context, 'beta', betaUnits)
+  return { app, alpha, beta, atAlpha: await membersOf(app, alpha), atBeta: await membersOf(app, beta) }
+}
+
+async function membersOf(app: TestApp, venue: VenueFixture): Promise<Record<Role, Client>> {
+  const clients = {} as Record<Role, Client>
+  for (const role of ROLES) clients[role] = await signedIn(app.url, venue.emails[role])
+  return clients
 }

@@ -2,6 +2,7 @@ import { Op } from 'sequelize'
 import type { BrickType, BrickTypeInput, BrickTypeUpdate } from '../../../shared/schemas/brick-type.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 import { inTransaction, type ServiceContext, type TransactionContext } from '../../context.js'
+import { activeIn, namedListRules } from '../../db/named-list.js'
 import { apiFromStored, storedFromApi } from '../../db/quantities.js'
 import { AppError, notFound, staleVersion } from '../../http/errors.js'
 import { unitsTypedIn } from '../venues/units.js'
@@ -31,33 +32,22 @@ function fromApi(body: Omit<BrickTypeInput, 'unitSystem'>, system: UnitSystem) {
   }
 }
 
-const active = (venueId: string) => ({ venueId, retiredAt: null })
+const list = namedListRules((db) => db.models.BrickType, {
+  missing: 'That brick type',
+  nameTaken: (name) => `A brick type named "${name}" already exists`,
+})
 
 /** The brick types in use, by name; retired ones are history only. */
 export async function listBrickTypes(ctx: ServiceContext): Promise<BrickType[]> {
   const system = await venueUnitSystem(ctx)
-  const rows = await ctx.db.models.BrickType.findAll({
-    where: active(ctx.actor.venueId),
-    order: [['name', 'ASC']],
-    transaction: ctx.transaction,
-  })
+  const rows = await list.listInUse(ctx, [['name', 'ASC']])
   return rows.map((row) => toApi(row, system))
-}
-
-async function refuseTakenName(tx: TransactionContext, name: string, exceptId?: string) {
-  const clash = await tx.db.models.BrickType.findOne({
-    where: { ...active(tx.actor.venueId), name },
-    attributes: ['id'],
-    transaction: tx.transaction,
-  })
-  if (clash && clash.id !== exceptId)
-    throw new AppError(409, 'duplicate', `A brick type named "${name}" already exists`, { name: 'Already in use' })
 }
 
 export function createBrickType(ctx: ServiceContext, body: BrickTypeInput): Promise<BrickType> {
   return inTransaction(ctx, async (tx) => {
     const system = await unitsTypedIn(tx, body.unitSystem)
-    await refuseTakenName(tx, body.name)
+    await list.refuseTakenName(tx, body.name)
     const row = await tx.db.models.BrickType.create(
       // A new type's bricks all start in storage.
       { ...fromApi(body, system), inStorage: body.quantityOwned, venueId: tx.actor.venueId, retiredAt: null },
@@ -67,18 +57,10 @@ export function createBrickType(ctx: ServiceContext, body: BrickTypeInput): Prom
   })
 }
 
-async function refuseUnknown(tx: TransactionContext, id: string) {
-  const found = await tx.db.models.BrickType.count({
-    where: { id, ...active(tx.actor.venueId) },
-    transaction: tx.transaction,
-  })
-  if (!found) throw notFound('That brick type')
-}
-
 /** Why a conditional update took no row: gone (404), saved by someone else (409), or fewer owned than in use. */
 async function refuseFailedUpdate(tx: TransactionContext, id: string, body: BrickTypeUpdate): Promise<never> {
   const row = await tx.db.models.BrickType.findOne({
-    where: { id, ...active(tx.actor.venueId) },
+    where: { id, ...activeIn(tx.actor.venueId) },
     transaction: tx.transaction,
   })
   if (!row) throw notFound('That brick type')
@@ -96,26 +78,20 @@ async function refuseFailedUpdate(tx: TransactionContext, id: string, body: Bric
 export function updateBrickType(ctx: ServiceContext, id: string, body: BrickTypeUpdate): Promise<BrickType> {
   return inTransaction(ctx, async (tx) => {
     const system = await unitsTypedIn(tx, body.unitSystem)
-    await refuseUnknown(tx, id)
-    await refuseTakenName(tx, body.name, id)
+    await list.refuseUnknown(tx, id)
+    await list.refuseTakenName(tx, body.name, id)
     const { version, unitSystem: _typedIn, ...fields } = body
     const owned = Number(body.quantityOwned)
     const { literal } = tx.db.sequelize
     // Bricks bought or sold go into or out of storage; those on arbors or reserved stay where they are.
-    const [count, rows] = await tx.db.models.BrickType.update(
-      {
-        ...fromApi(fields, system),
-        inStorage: literal(`in_storage + (${owned} - quantity_owned)`),
-        version: version + 1,
-      },
-      {
-        where: { id, version, ...active(tx.actor.venueId), [Op.and]: literal(`on_arbors + reserved <= ${owned}`) },
-        transaction: tx.transaction,
-        returning: true,
-      },
+    const row = await list.updateAtVersion(
+      tx,
+      id,
+      version,
+      { ...fromApi(fields, system), inStorage: literal(`in_storage + (${owned} - quantity_owned)`) },
+      { [Op.and]: literal(`on_arbors + reserved <= ${owned}`) },
     )
-    if (count === 0) await refuseFailedUpdate(tx, id, body)
-    return toApi(rows[0]!, system)
+    return toApi(row ?? (await refuseFailedUpdate(tx, id, body)), system)
   })
 }
 
@@ -130,7 +106,7 @@ const isForeignKeyViolation = (error: unknown) =>
 export function deleteBrickType(ctx: ServiceContext, id: string): Promise<void> {
   return inTransaction(ctx, async (tx) => {
     const { db, transaction } = tx
-    const where = { id, ...active(tx.actor.venueId) }
+    const where = { id, ...activeIn(tx.actor.venueId) }
     try {
       // A savepoint, so a refusal leaves the outer transaction usable for the retirement.
       const deleted = await db.sequelize.transaction({ transaction }, (savepoint) =>
@@ -139,11 +115,7 @@ export function deleteBrickType(ctx: ServiceContext, id: string): Promise<void> 
       if (deleted === 0) throw notFound('That brick type')
     } catch (error) {
       if (!isForeignKeyViolation(error)) throw error
-      const [retired] = await db.models.BrickType.update(
-        { retiredAt: tx.clock.now(), version: db.sequelize.literal('version + 1') },
-        { where, transaction },
-      )
-      if (retired === 0) throw notFound('That brick type')
+      await list.retire(tx, id)
     }
   })
 }

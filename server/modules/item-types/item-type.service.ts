@@ -2,8 +2,9 @@ import type { LibraryWeights } from '../../../shared/hang/hang-items.js'
 import type { ItemType, ItemTypeInput, ItemTypeUpdate } from '../../../shared/schemas/item-type.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 import { inTransaction, type ServiceContext, type TransactionContext } from '../../context.js'
+import { activeIn, namedListRules } from '../../db/named-list.js'
 import { apiFromStored, storedFromApi } from '../../db/quantities.js'
-import { AppError, notFound, staleVersion } from '../../http/errors.js'
+import { staleVersion } from '../../http/errors.js'
 import { unitsTypedIn } from '../venues/units.js'
 import { venueUnitSystem } from '../venues/venue.service.js'
 import type { ItemTypeModel } from './item-type.model.js'
@@ -31,19 +32,18 @@ function fromApi(body: Omit<ItemTypeInput, 'unitSystem'>, system: UnitSystem) {
   }
 }
 
-const active = (venueId: string) => ({ venueId, retiredAt: null })
+const list = namedListRules((db) => db.models.ItemType, {
+  missing: 'That item type',
+  nameTaken: (name) => `The library already has an item named "${name}"`,
+})
 
 /** The library as it stands, by category and name; retired types are history only. */
 export async function listItemTypes(ctx: ServiceContext): Promise<ItemType[]> {
   const system = await venueUnitSystem(ctx)
-  const rows = await ctx.db.models.ItemType.findAll({
-    where: active(ctx.actor.venueId),
-    order: [
-      ['category', 'ASC'],
-      ['name', 'ASC'],
-    ],
-    transaction: ctx.transaction,
-  })
+  const rows = await list.listInUse(ctx, [
+    ['category', 'ASC'],
+    ['name', 'ASC'],
+  ])
   return rows.map((row) => toApi(row, system))
 }
 
@@ -58,27 +58,17 @@ export async function libraryWeights(
 ): Promise<Map<string, LibraryWeights>> {
   if (ids.length === 0) return new Map()
   const rows = await tx.db.models.ItemType.findAll({
-    where: { ...active(tx.actor.venueId), id: [...new Set(ids)] },
+    where: { ...activeIn(tx.actor.venueId), id: [...new Set(ids)] },
     transaction: tx.transaction,
     lock: tx.transaction.LOCK.SHARE, // a change of weight waits for the hang that used the old one
   })
   return new Map(rows.map((row) => [row.id, toApi(row, system)]))
 }
 
-async function refuseTakenName(tx: TransactionContext, name: string, exceptId?: string) {
-  const clash = await tx.db.models.ItemType.findOne({
-    where: { ...active(tx.actor.venueId), name },
-    attributes: ['id'],
-    transaction: tx.transaction,
-  })
-  if (clash && clash.id !== exceptId)
-    throw new AppError(409, 'duplicate', `The library already has an item named "${name}"`, { name: 'Already in use' })
-}
-
 export function createItemType(ctx: ServiceContext, body: ItemTypeInput): Promise<ItemType> {
   return inTransaction(ctx, async (tx) => {
     const system = await unitsTypedIn(tx, body.unitSystem)
-    await refuseTakenName(tx, body.name)
+    await list.refuseTakenName(tx, body.name)
     const row = await tx.db.models.ItemType.create(
       { ...fromApi(body, system), venueId: tx.actor.venueId, retiredAt: null },
       { transaction: tx.transaction },
@@ -87,30 +77,19 @@ export function createItemType(ctx: ServiceContext, body: ItemTypeInput): Promis
   })
 }
 
-async function refuseUnknown(tx: TransactionContext, id: string) {
-  const found = await tx.db.models.ItemType.count({
-    where: { id, ...active(tx.actor.venueId) },
-    transaction: tx.transaction,
-  })
-  if (!found) throw notFound('That item type')
-}
-
 /** Saves an item type if nobody changed it since `version` was read (else 409). Answers from the row written. */
 export function updateItemType(ctx: ServiceContext, id: string, body: ItemTypeUpdate): Promise<ItemType> {
   return inTransaction(ctx, async (tx) => {
     const system = await unitsTypedIn(tx, body.unitSystem)
-    await refuseUnknown(tx, id)
-    await refuseTakenName(tx, body.name, id)
+    await list.refuseUnknown(tx, id)
+    await list.refuseTakenName(tx, body.name, id)
     const { version, unitSystem: _typedIn, ...fields } = body
-    const [count, rows] = await tx.db.models.ItemType.update(
-      { ...fromApi(fields, system), version: version + 1 },
-      { where: { id, version, ...active(tx.actor.venueId) }, transaction: tx.transaction, returning: true },
-    )
-    if (count === 0) {
-      await refuseUnknown(tx, id) // retired meanwhile: 404; otherwise someone saved first
+    const row = await list.updateAtVersion(tx, id, version, fromApi(fields, system))
+    if (!row) {
+      await list.refuseUnknown(tx, id) // retired meanwhile: 404; otherwise someone saved first
       throw staleVersion(`Item type "${body.name}"`)
     }
-    return toApi(rows[0]!, system)
+    return toApi(row, system)
   })
 }
 
@@ -119,11 +98,5 @@ export function updateItemType(ctx: ServiceContext, id: string, body: ItemTypeUp
  * retired, never deleted; conditional on it still being in the library, so of two at once one answers 404.
  */
 export function retireItemType(ctx: ServiceContext, id: string): Promise<void> {
-  return inTransaction(ctx, async (tx) => {
-    const [count] = await tx.db.models.ItemType.update(
-      { retiredAt: tx.clock.now(), version: tx.db.sequelize.literal('version + 1') },
-      { where: { id, ...active(tx.actor.venueId) }, transaction: tx.transaction },
-    )
-    if (count === 0) throw notFound('That item type')
-  })
+  return inTransaction(ctx, (tx) => list.retire(tx, id))
 }

@@ -10,9 +10,26 @@ import { lockTicket, moveTicket, type LockedTicket } from './ticket-store.js'
 
 const stepFacts = (t: LockedTicket) => ({ id: t.id, hangRevision: t.hangRevision, hangTitle: t.hangTitle })
 
-function refuseOwnTicket(tx: TransactionContext, ticket: LockedTicket) {
+/**
+ * Locks a requested ticket and moves it to `verdict`, recording who decided, when and why; conditional on the
+ * state and version it starts from. Nobody decides a ticket they opened.
+ */
+async function decideTicket(
+  tx: TransactionContext,
+  id: string,
+  verdict: 'approved' | 'declined',
+  body: { version: number; comment?: string },
+): Promise<LockedTicket> {
+  const ticket = await lockTicket(tx, id)
   if (ticket.requestedBy === tx.actor.id)
     throw new AppError(403, 'forbidden', 'Nobody decides a ticket they opened; another technical director must')
+  await moveTicket(
+    tx,
+    ticket,
+    { name: verdict, from: ['requested'], to: verdict, version: body.version },
+    { decided_by: tx.actor.id, decided_at: tx.clock.now(), decision_comment: body.comment || null },
+  )
+  return ticket
 }
 
 /**
@@ -21,14 +38,7 @@ function refuseOwnTicket(tx: TransactionContext, ticket: LockedTicket) {
  */
 export function approveTicket(ctx: ServiceContext, id: string, body: TicketApprove): Promise<TicketView> {
   return inTransaction(ctx, async (tx) => {
-    const ticket = await lockTicket(tx, id)
-    refuseOwnTicket(tx, ticket)
-    await moveTicket(
-      tx,
-      ticket,
-      { name: 'approved', from: ['requested'], to: 'approved', version: body.version },
-      { decided_by: tx.actor.id, decided_at: tx.clock.now(), decision_comment: body.comment || null },
-    )
+    const ticket = await decideTicket(tx, id, 'approved', body)
     const bricks = await ticketBricks(tx, id)
     await reserveBricks(
       tx,
@@ -51,14 +61,7 @@ export function approveTicket(ctx: ServiceContext, id: string, body: TicketAppro
 /** Declines a requested ticket with the comment that says why; the opener is mailed. */
 export function declineTicket(ctx: ServiceContext, id: string, body: TicketDecline): Promise<TicketView> {
   return inTransaction(ctx, async (tx) => {
-    const ticket = await lockTicket(tx, id)
-    refuseOwnTicket(tx, ticket)
-    await moveTicket(
-      tx,
-      ticket,
-      { name: 'declined', from: ['requested'], to: 'declined', version: body.version },
-      { decided_by: tx.actor.id, decided_at: tx.clock.now(), decision_comment: body.comment },
-    )
+    const ticket = await decideTicket(tx, id, 'declined', body)
     const changes = changesOf(await ticketBricks(tx, id))
     await recordTicketStep(tx, 'ticket-declined', ticket.linesetId, {
       ticket: stepFacts(ticket),

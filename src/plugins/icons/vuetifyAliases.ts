@@ -32,9 +32,10 @@ const svg = (path: string) => `svg:${path}`
 
 /**
  * The icons Vuetify's own components ask for by alias (`$close`, `$dropdown`, ...), drawn as the same Material
- * Design paths as Vuetify's `mdi-svg` set, but only for the components the client uses: that set also carries the
- * rating, date, colour, tree, media and key-cap icons (about 1.6 KB compressed, loaded on every page). A Vuetify
- * component added later that asks for an alias missing here draws an empty icon: add the alias with it.
+ * Design paths as Vuetify's own SVG icon set (vuetify/iconsets/mdi-svg), but only for the components the client
+ * uses: that set also carries the rating, date, colour, tree, media and key-cap icons (about 1.6 KB compressed,
+ * loaded on every page). A Vuetify component added later that asks for an alias missing here draws an empty icon:
+ * add the alias with it (tests/unit/vuetify-aliases.test.ts names such a component).
  */
 export const vuetifyAliases: Partial<IconAliases> = {
   collapse: svg(mdiChevronUp),

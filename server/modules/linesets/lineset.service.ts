@@ -37,9 +37,14 @@ export async function listLinesets(ctx: ServiceContext): Promise<LinesetListItem
     }),
     venue.then((policy) => listedStates(ctx, policy.unitSystem, policy.tolerance)),
   ])
+  // Each item is the lineset's fresh answer with its state's fields added in place: no copies per row.
   return rows.map((row) => {
-    const { currentHang, ...state } = states.get(row.id) ?? { ...UNKNOWN_STATE, currentHang: null }
-    return { ...linesetToApi(row, policy.unitSystem), ...state, currentHang }
+    const state = states.get(row.id)
+    const item = linesetToApi(row, policy.unitSystem) as LinesetListItem
+    item.operatingStatus = state?.operatingStatus ?? UNKNOWN_STATE.operatingStatus
+    item.lockout = state?.lockout ?? UNKNOWN_STATE.lockout
+    item.currentHang = state?.currentHang ?? null
+    return item
   })
 }
 

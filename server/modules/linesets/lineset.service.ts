@@ -26,7 +26,9 @@ const activeLinesetsSqls = new WeakMap<ModelStatic<Model>, string>()
 function activeLinesetsSql(model: ModelStatic<Model>): string {
   let sql = activeLinesetsSqls.get(model)
   if (sql === undefined) {
-    const columns = Object.values(model.getAttributes()).map((column) => `"${column.field}" AS "${column.fieldName}"`)
+    const columns = Object.entries(model.getAttributes()).map(
+      ([name, column]) => `"${column.field ?? name}" AS "${name}"`,
+    )
     sql = `SELECT ${columns.join(', ')} FROM linesets WHERE venue_id = $1 AND retired_at IS NULL ORDER BY number`
     activeLinesetsSqls.set(model, sql)
   }

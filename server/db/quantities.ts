@@ -19,12 +19,11 @@ const TIE_MARGIN = 1e-12
 // Beyond this the scaled figure would pass 2^53, where doubles stop holding every integer.
 const LARGEST_FAST = 1e9
 
-const factorNumbers = new Map<string, number>()
+// Unit factors never change: kept per system and quantity, looked up without building a key per figure.
+const factorNumbers: Partial<Record<UnitSystem, Partial<Record<Quantity, number>>>> = {}
 function factorNumber(quantity: Quantity, system: UnitSystem): number {
-  const key = `${quantity}:${system}`
-  let factor = factorNumbers.get(key)
-  if (factor === undefined) factorNumbers.set(key, (factor = siPerUnit(quantity, system).toNumber()))
-  return factor
+  const factors = (factorNumbers[system] ??= {})
+  return (factors[quantity] ??= siPerUnit(quantity, system).toNumber())
 }
 
 /**

@@ -58,7 +58,8 @@ export function linesetToApi(row: LinesetRow, system: UnitSystem): Lineset {
     id: row.id,
     version: row.version,
     updatedAt: row.updatedAt.toISOString(),
-    ...storedToApi(storedFromRow(row), system),
+    // A row holds every stored field under the same name: read in place, not copied first (lists map many).
+    ...storedToApi(row as unknown as StoredLineset, system),
   }
 }
 

@@ -1,33 +1,21 @@
 import type { Page } from 'playwright-core'
 import { beforeAll, describe, expect, it } from 'vitest'
-import { DEMO_PASSWORD } from '../../server/db/seeders/demo-people.js'
 import { demoInBrowser, signInOnPage } from '../support/demo-in-browser.js'
 import { SCREENS, type DemoIds, type Screen } from '../support/screens.js'
-import { signedIn } from '../support/test-app.js'
+import { saveHangOnReadySet } from '../support/ready-set-hang.js'
 
 const suite = demoInBrowser()
 let ids: DemoIds
 
 // A change ticket for the ticket page: the administrator saves a hang on a ready counterweight set and asks for it.
 beforeAll(async () => {
-  const api = await signedIn(suite.app.url, 'admin@demo.test', DEMO_PASSWORD)
-  const sets = (await api.get('/api/v1/linesets').expect(200)).body as Array<{
-    id: string
-    kind: string
-    operatingStatus: string
-    battenLength: number
-  }>
-  const set = sets.find((s) => s.kind === 'counterweight-single' && s.operatingStatus === 'ready')!
-  const hangs = (await api.get(`/api/v1/linesets/${set.id}/hangs`).expect(200)).body as { revision: number }[]
-  const hang = await api
-    .post(`/api/v1/linesets/${set.id}/hangs`, {
-      title: 'Act two: cloud border',
-      basedOnRevision: hangs[0]?.revision ?? null,
-      items: [{ label: 'Cloud border', category: 'scenery', weight: 90, at: set.battenLength / 2 }],
-      unitSystem: 'imperial',
-    })
-    .expect(201)
-  const ticket = await api.post('/api/v1/tickets', { hangId: hang.body.id }).expect(201)
+  const { api, set, hangId } = await saveHangOnReadySet(
+    suite.app.url,
+    'admin@demo.test',
+    'Act two: cloud border',
+    (set) => [{ label: 'Cloud border', category: 'scenery', weight: 90, at: set.battenLength / 2 }],
+  )
+  const ticket = await api.post('/api/v1/tickets', { hangId }).expect(201)
   ids = { linesetId: set.id, ticketId: ticket.body.id }
 })
 

@@ -2,9 +2,8 @@ import { join } from 'node:path'
 import { statSync } from 'node:fs'
 import type { Page } from 'playwright-core'
 import { beforeAll, describe, expect, it } from 'vitest'
-import { DEMO_PASSWORD } from '../../server/db/seeders/demo-people.js'
 import { artifacts, demoInBrowser, signInOnPage } from '../support/demo-in-browser.js'
-import { signedIn } from '../support/test-app.js'
+import { saveHangOnReadySet } from '../support/ready-set-hang.js'
 
 // The lineset page, with its batten diagram, printed on both of the paper sizes a theatre office is likely to have.
 // Every wait is for a state on the page, never for a time.
@@ -21,26 +20,10 @@ let linesetId: string
 
 // A lineset with items on its batten, so the diagram draws markers, labels, the moment and the shape.
 beforeAll(async () => {
-  const api = await signedIn(suite.app.url, 'fly@demo.test', DEMO_PASSWORD)
-  const sets = (await api.get('/api/v1/linesets').expect(200)).body as Array<{
-    id: string
-    kind: string
-    operatingStatus: string
-    battenLength: number
-  }>
-  const set = sets.find((s) => s.kind === 'counterweight-single' && s.operatingStatus === 'ready')!
-  const hangs = (await api.get(`/api/v1/linesets/${set.id}/hangs`).expect(200)).body as { revision: number }[]
-  await api
-    .post(`/api/v1/linesets/${set.id}/hangs`, {
-      title: 'Act one: forest wings',
-      basedOnRevision: hangs[0]?.revision ?? null,
-      items: [
-        { label: 'Forest border', category: 'scenery', weightPerLength: 3, from: 0, to: set.battenLength },
-        { label: 'Lantern cluster', category: 'lighting', weight: 85, at: set.battenLength / 4 },
-      ],
-      unitSystem: 'imperial',
-    })
-    .expect(201)
+  const { set } = await saveHangOnReadySet(suite.app.url, 'fly@demo.test', 'Act one: forest wings', (set) => [
+    { label: 'Forest border', category: 'scenery', weightPerLength: 3, from: 0, to: set.battenLength },
+    { label: 'Lantern cluster', category: 'lighting', weight: 85, at: set.battenLength / 4 },
+  ])
   linesetId = set.id
 })
 

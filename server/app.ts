@@ -73,6 +73,10 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
 
   app.set('trust proxy', config.trustProxy)
   app.disable('x-powered-by')
+  // API answers are never stored (no-store), so an ETag on them only costs a hash of every body. A function
+  // that gives none, rather than `false`: Express hands the setting's truth to files it sends, and the built
+  // client's pages keep their ETags (from the file's size and time, not its bytes).
+  app.set('etag', () => undefined)
   app.use(securityHeaders(config))
 
   const api = express.Router()

@@ -47,7 +47,7 @@ describe('API answers are never kept by a browser or proxy', () => {
 
 describe('HSTS only when served over HTTPS', () => {
   it("when the config does not say HTTPS, then no Strict-Transport-Security is sent (helmet's other headers are)", async () => {
-    for (const path of ['/api/v1/session', '/app.js']) {
+    for (const path of ['/api/v1/session', '/linesets']) {
       const res = await request(plain.url).get(path)
       expect(res.headers['strict-transport-security'], path).toBeUndefined()
       expect(res.headers['x-content-type-options']).toBe('nosniff')
@@ -67,5 +67,30 @@ describe('HSTS only when served over HTTPS', () => {
       c.startsWith('__Host-loftledger.csrf='),
     )
     expect(cookie).toMatch(/; Path=\/; .*HttpOnly; Secure; SameSite=Strict/)
+  })
+})
+
+describe('API answers carry the policy for data, pages the policy for pages', () => {
+  it('when an API answer is sent, then nothing may load or frame it, and it has no ETag (it is never stored)', async () => {
+    const res = await request(plain.url).get('/api/v1/session').expect(200)
+    expect(res.headers['content-security-policy']).toBe("default-src 'none';frame-ancestors 'none'")
+    expect(res.headers['x-frame-options']).toBe('DENY')
+    expect(res.headers['x-content-type-options']).toBe('nosniff')
+    expect(res.headers['cross-origin-resource-policy']).toBe('same-origin')
+    expect(res.headers.etag).toBeUndefined()
+  })
+
+  it("when a page of the app is sent, then it carries the app's policy and may be revalidated by its ETag", async () => {
+    const page = await request(plain.url).get('/linesets').expect(200)
+    expect(page.headers['content-security-policy']).toMatch(/default-src 'self'/)
+    expect(page.headers['content-security-policy']).toMatch(/script-src 'self'/)
+    expect(page.headers['cross-origin-opener-policy']).toBe('same-origin')
+    expect(page.headers.etag).toBeDefined()
+  })
+
+  it('when a script is sent, then it keeps nosniff but no page policy', async () => {
+    const res = await request(plain.url).get('/app.js').expect(200)
+    expect(res.headers['x-content-type-options']).toBe('nosniff')
+    expect(res.headers['content-security-policy']).toBeUndefined()
   })
 })

@@ -2,7 +2,8 @@
  * The client's weight and start-up speed, as a person on a slow phone meets them: the built client served by the
  * real server with the demo venue on a throwaway database, opened in Debian's Chromium with an empty cache.
  * Prints the bytes that cross the wire (encoded sizes, as sent) to show the sign-in page and to reach the
- * linesets list after signing in, and the sign-in page's time to interactive with the CPU slowed 4x.
+ * linesets list after signing in, and the sign-in page's times with the CPU slowed 4x: until its fields take typing
+ * and a press of Sign in (the plain form index.html carries), and until the app's own form has taken over.
  * `npm run bench:client -- --requests` also lists every request with its size.
  * Targets: at most 300 KB to reach the linesets list; the sign-in page interactive within 1 s.
  */
@@ -12,7 +13,7 @@ import { DEMO_PASSWORD } from '../server/db/seeders/demo-people.js'
 import { seedDemoIfEmpty } from '../server/db/seeders/demo.js'
 import { loadConfig } from '../server/config.js'
 import { startServer } from '../server/index.js'
-import { launchBenchChromium, measureWire, timeToInteractive } from './lib/client-weight.js'
+import { launchBenchChromium, measureWire, timeToInteractive, type SignInTimes } from './lib/client-weight.js'
 import { buildClientIfStale } from './lib/client-build.js'
 import { ensureDatabase } from './lib/database.js'
 import { freePort } from './lib/free-port.js'
@@ -49,9 +50,10 @@ async function main() {
     closeBrowser = () => browser.close()
 
     const wire = await measureWire(browser, running.url, { email: 'fly@demo.test', password: DEMO_PASSWORD })
-    const times: number[] = []
-    for (let run = 0; run < RUNS; run += 1) times.push(await timeToInteractive(browser, `${running.url}/sign-in`, 4))
-
+    const runs: SignInTimes[] = []
+    for (let run = 0; run < RUNS; run += 1) runs.push(await timeToInteractive(browser, `${running.url}/sign-in`, 4))
+    const times = runs.map((run) => run.interactive)
+    const appTimes = runs.map((run) => run.appReady)
     const interactive = median(times)
     console.log('Client weight (encoded bytes over the wire, empty cache, demo data)')
     console.log(`  sign-in page shown:                     ${kb(wire.signIn)} in ${wire.signInRequests} requests`)
@@ -61,8 +63,13 @@ async function main() {
     if (process.argv.includes('--requests'))
       for (const { path, bytes } of wire.requests) console.log(`      ${kb(bytes).padStart(10)}  ${path}`)
     console.log(`Sign-in page interactive at 4x CPU slowdown, loopback (${RUNS} runs, empty cache)`)
-    console.log(`  median ${interactive.toFixed(0)} ms, each: ${times.map((t) => t.toFixed(0)).join(', ')} ms`)
-    console.log(`  target <= ${INTERACTIVE_TARGET_MS} ms`)
+    console.log(`  fields take typing and a press of Sign in (the plain form in index.html):`)
+    console.log(`    median ${interactive.toFixed(0)} ms, each: ${times.map((t) => t.toFixed(0)).join(', ')} ms`)
+    console.log(`    target <= ${INTERACTIVE_TARGET_MS} ms`)
+    console.log(`  the app's own form has taken over (a held press is sent then):`)
+    console.log(
+      `    median ${median(appTimes).toFixed(0)} ms, each: ${appTimes.map((t) => t.toFixed(0)).join(', ')} ms`,
+    )
     const met = wire.toList <= WIRE_TARGET_KB * 1024 && interactive <= INTERACTIVE_TARGET_MS
     console.log(met ? 'Both targets met.' : 'A target is missed.')
     process.exitCode = met ? 0 : 1

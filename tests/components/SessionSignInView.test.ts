@@ -1,3 +1,5 @@
+import { readFileSync } from 'node:fs'
+import { join } from 'node:path'
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest'
 import { flushPromises, type VueWrapper } from '@vue/test-utils'
 import { createPinia, setActivePinia } from 'pinia'
@@ -36,6 +38,51 @@ async function signIn(w: VueWrapper, email: string, password: string) {
   await w.get('[data-testid="sign-in-form"]').trigger('submit')
   await flushPromises()
 }
+
+/** Puts index.html's own plain sign-in form on the page, as typed in before the app mounted. */
+function typeOnPlainForm(email: string, password: string, { pressed = false } = {}) {
+  const page = new DOMParser().parseFromString(readFileSync(join(process.cwd(), 'index.html'), 'utf8'), 'text/html')
+  const early = document.importNode(page.getElementById('early-sign-in')!, true)
+  early.hidden = false
+  document.body.appendChild(early)
+  early.querySelector<HTMLInputElement>('input[name=email]')!.value = email
+  const passwordField = early.querySelector<HTMLInputElement>('input[name=password]')!
+  passwordField.value = password
+  passwordField.focus()
+  if (pressed) early.querySelector('form')!.setAttribute('data-submitted', 'true')
+}
+
+describe('SessionSignInView taking over the plain form', () => {
+  it('when someone typed on the plain form, then the app form holds what they typed, the caret stays in its field and the plain form is gone', async () => {
+    typeOnPlainForm('crew@example.test', 'half-typ')
+    const { w } = await openSignIn()
+    await flushPromises()
+    const password = w.get('[data-testid="sign-in-password"] input').element as HTMLInputElement
+    expect((w.get('[data-testid="sign-in-email"] input').element as HTMLInputElement).value).toBe('crew@example.test')
+    expect(password.value).toBe('half-typ')
+    expect(document.activeElement).toBe(password)
+    expect(document.getElementById('early-sign-in')).toBeNull()
+    expect(document.querySelectorAll('[data-testid="sign-in-form"]')).toHaveLength(1)
+    expect(sessionApi.signIn).not.toHaveBeenCalled()
+  })
+
+  it('when Sign in was pressed on the plain form, then the app signs in with it at once and goes where asked', async () => {
+    vi.mocked(sessionApi.signIn).mockResolvedValue({ user: personWith('fly-operator'), csrfToken: 'fresh-token' })
+    typeOnPlainForm('crew@example.test', 'correct horse battery', { pressed: true })
+    const { router } = await openSignIn('/bricks')
+    await flushPromises()
+    expect(sessionApi.signIn).toHaveBeenCalledWith({ email: 'crew@example.test', password: 'correct horse battery' })
+    await vi.waitFor(() => expect(router.currentRoute.value.fullPath).toBe('/bricks'))
+  })
+
+  it('when Sign in was pressed with the fields empty, then the app form names what is missing', async () => {
+    typeOnPlainForm('', '', { pressed: true })
+    const { w } = await openSignIn()
+    await flushPromises()
+    expect(w.get('[data-testid="sign-in-email"]').find('.v-messages').text()).not.toBe('')
+    expect(sessionApi.signIn).not.toHaveBeenCalled()
+  })
+})
 
 describe('SessionSignInView', () => {
   it('when the page appears and nothing has focus, then the e-mail field takes it once and the form says it is ready', async () => {

@@ -21,7 +21,7 @@ export interface Screen {
  * it as loaded, and the roles its route allows (the same constants the router uses).
  */
 export const SCREENS: readonly Screen[] = [
-  { name: 'sign-in', path: () => '/sign-in', ready: '[data-testid=sign-in-form][data-ready=true]' },
+  { name: 'sign-in', path: () => '/sign-in', ready: '[data-testid=sign-in-form][data-ready=true]:not([data-early])' },
   {
     name: 'invitation (unusable)',
     path: () => '/invitation/no-such-token',

@@ -2,7 +2,7 @@ import { z } from 'zod'
 import type { HangEntry } from '../hang/hang-items.js'
 import type { UnitSystem } from '../units/systems.js'
 import type { CalculationResult } from './calculation-result.js'
-import { MAX_ITEMS } from './calculation.js'
+import { MAX_ITEMS, type CalculationInput } from './calculation.js'
 import { hangEntrySchemaFor } from './hang-entry.js'
 import { count, typedInField } from './quantity.js'
 import { singleLineText } from './text.js'
@@ -43,11 +43,14 @@ export interface HangSummary {
 /**
  * A saved revision: the items as entered (in the venue's units) and the engine's result, exactly as
  * `POST /calculations` answers for the expanded input, in `result.units` (the venue's when it was saved).
+ * `input` is that expanded input as it was saved (the lineset's batten, pipe and pick points then, the venue's
+ * figures then, one load per item), in `result.units`; null when the revision has none that still reads.
  */
 export interface HangRevision extends HangSummary {
   linesetId: string
   unitSystem: UnitSystem
   items: HangEntry[]
+  input: CalculationInput | null
   result: CalculationResult
 }
 

@@ -65,6 +65,46 @@ describe('saving a hang', () => {
     expect(row!.calculationResult).toEqual(saved.result)
   })
 
+  it('when a revision is read, then it carries the engine input it was computed from, one load per item, on the batten as it was', async () => {
+    const linesetId = await freshLineset()
+    const saved = (await save(linesetId, electric()).expect(201)).body
+    const read = (await stageManager.get(`${hangsOf(linesetId)}/${saved.id}`).expect(200)).body
+    const row = await app.handle.db.models.Hang.findByPk(saved.id)
+    expect(read.input).toEqual(row!.calculationInput)
+    expect(saved.input).toEqual(read.input)
+    expect(read.input.units).toBe(read.result.units)
+    expect(read.input.batten).toMatchObject({ length: 40, pickPoints: [0, 10, 20, 30, 40] })
+    // Five wash units spread from 4 to 36 ft, the cable along the whole batten, the sandbag at 20 ft.
+    expect(read.input.items.filter((item: { at?: number }) => item.at !== undefined)).toHaveLength(6)
+    expect(read.input.items.filter((item: { from?: number }) => item.from !== undefined)).toEqual([
+      { label: 'Cable', weightPerLength: 0.5, from: 0, to: 40 },
+    ])
+    // The lineset changes afterwards; the revision still reads with the batten it was computed on.
+    const lineset = (await director.get(`/api/v1/linesets/${linesetId}`).expect(200)).body
+    await director
+      .put(`/api/v1/linesets/${linesetId}`, {
+        ...sampleLineset(lineset.number),
+        version: lineset.version,
+        battenLength: 42,
+      })
+      .expect(200)
+    const after = (await stageManager.get(`${hangsOf(linesetId)}/${saved.id}`).expect(200)).body
+    expect(after.input.batten.length).toBe(40)
+  })
+
+  it('when the stored input is missing or no longer reads as an engine input, then the revision answers input null and its result as saved', async () => {
+    const linesetId = await freshLineset()
+    const saved = (await save(linesetId, electric()).expect(201)).body
+    const read = () => stageManager.get(`${hangsOf(linesetId)}/${saved.id}`).expect(200)
+    await app.handle.db.models.Hang.update(
+      { calculationInput: { units: 'imperial', batten: 'old shape' } },
+      { where: { id: saved.id } },
+    )
+    expect((await read()).body).toMatchObject({ input: null, result: saved.result })
+    await app.handle.db.models.Hang.update({ calculationInput: null }, { where: { id: saved.id } })
+    expect((await read()).body).toMatchObject({ input: null, result: saved.result })
+  })
+
   it('when library units are spread along a stretch, then the engine gets one load per unit, evenly from the first to the last', async () => {
     const linesetId = await freshLineset()
     const saved = (await save(linesetId, electric().slice(0, 1)).expect(201)).body

@@ -140,6 +140,54 @@ describe('LinesetHistoryView', () => {
     expect(changeIn(w, 'total')).toBe('−20.06 lb')
   })
 
+  it('when both revisions stored their engine input, then each drawing shows its items as markers and bands and the moment under the batten', async () => {
+    const { w } = await openHistory()
+    const drawn = (side: string, what: string) => w.findAll(`[data-testid="${side}"] [data-testid="${what}"]`).length
+    // Revision 2: the boom arms (two at one place, one load) and the painted drop; revision 3: boom arms and lamp.
+    expect([
+      drawn('comparison-left-diagram', 'diagram-item-point'),
+      drawn('comparison-left-diagram', 'diagram-item-stretch'),
+    ]).toEqual([1, 1])
+    expect([
+      drawn('comparison-right-diagram', 'diagram-item-point'),
+      drawn('comparison-right-diagram', 'diagram-item-stretch'),
+    ]).toEqual([2, 0])
+    for (const side of ['comparison-left-diagram', 'comparison-right-diagram']) {
+      const diagram = w.get(`[data-testid="${side}"]`)
+      expect(diagram.get('[data-testid="diagram-moment"]').attributes('d')).toMatch(/^M .* Z$/)
+      expect(diagram.get('[data-testid="diagram-moment-caption"]').text()).toContain('largest -300 lb·ft at 15 ft')
+      expect(diagram.find('[data-testid="diagram-shape"]').exists()).toBe(true)
+      expect(diagram.find('[data-testid="diagram-note"]').exists()).toBe(false)
+    }
+    expect(w.get('[data-testid="comparison-right-diagram"] [data-testid="diagram-item-point"]').text()).toContain(
+      'Boom arm: 28 lb at 1 ft',
+    )
+  })
+
+  it("when the lineset's pick points have moved since, then each side is drawn on the batten it was saved on and says so", async () => {
+    vi.mocked(linesetsApi.read).mockResolvedValue(linesetDetail({ pickPoints: [0, 20, 40] }))
+    const { w } = await openHistory()
+    const left = w.get('[data-testid="comparison-left-diagram"]')
+    expect(left.findAll('[data-diagram-arrow]')).toHaveLength(4)
+    expect(left.get('[data-testid="diagram-note"]').text()).toBe(
+      "Drawn as revision 2 was saved, with the lineset as it was then: a 40 ft batten on lines at 5 ft, 15 ft, 25 ft and 35 ft. The lineset's pick points have changed since.",
+    )
+    expect(left.find('[data-testid="diagram-moment"]').exists()).toBe(true)
+  })
+
+  it('when a revision kept no engine input, then its drawing shows the lines and loads alone and says why', async () => {
+    vi.mocked(hangsApi.read).mockImplementation(async (_lineset, id) =>
+      id === hangId(2) ? hangRevision(2, { input: null }) : hangRevision(3),
+    )
+    const { w } = await openHistory()
+    const left = w.get('[data-testid="comparison-left-diagram"]')
+    expect(left.findAll('[data-diagram-arrow]')).toHaveLength(4)
+    expect(left.find('[data-testid^="diagram-item-"]').exists()).toBe(false)
+    expect(left.find('[data-testid="diagram-moment"]').exists()).toBe(false)
+    expect(left.get('[data-testid="diagram-note"]').text()).toContain('Revision 2 kept no engine input')
+    expect(w.findAll('[data-testid="comparison-right-diagram"] [data-testid="diagram-item-point"]')).toHaveLength(2)
+  })
+
   it('when a lineset has a single revision, then there is nothing to compare, the page says so and offers no picks', async () => {
     vi.mocked(hangsApi.list).mockResolvedValue([summary(1)])
     const { w } = await openHistory()

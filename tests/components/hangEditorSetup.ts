@@ -75,6 +75,7 @@ export const REVISION_3: HangRevision = {
     { label: 'Colour wash', category: 'lighting', itemTypeId: WASH.id, quantity: 3, from: 10, to: 30 },
     { label: 'Data line', category: 'hardware', weightPerLength: 0.04, from: 0, to: 40 },
   ],
+  input: null,
   result: {} as HangRevision['result'],
 }
 

@@ -1,9 +1,12 @@
-import type { HangEntry } from '../../shared/hang/hang-items.js'
+import { expandHangEntries, type HangEntry } from '../../shared/hang/hang-items.js'
+import { linesetCalculationInput } from '../../shared/hang/lineset-calculation.js'
+import { MAX_ITEMS, type CalculationInput } from '../../shared/schemas/calculation.js'
 import type { CalculationResult } from '../../shared/schemas/calculation-result.js'
 import type { HangRevision, HangSummary, LinesetEventView } from '../../shared/schemas/index.js'
-import { lineset, personWith } from './fixtures'
+import { lineset, personWith, venue } from './fixtures'
 
-// Invented revisions of the test lineset; the results are made up by hand, not computed by the engine.
+// Invented revisions of the test lineset; the results are made up by hand, not computed by the engine. The inputs
+// are built as the server builds the one it stores: the entries expanded, on the test lineset, in the venue's terms.
 const operator = { id: personWith('fly-operator').id, name: 'Robin Crew' }
 
 export const revisionResult = (totalLoad: number, lineLoads: number[], fullBricks: number): CalculationResult => ({
@@ -44,6 +47,13 @@ const revisions: Record<number, { title: string; items: HangEntry[]; result: Cal
   },
 }
 
+/** The engine input a revision of these entries stores (one load per point entry, one per stretch). */
+export function revisionInput(items: HangEntry[]): CalculationInput {
+  const expanded = expandHangEntries(items, new Map(), 'imperial', MAX_ITEMS)
+  if (!expanded.ok) throw new Error('the fixture entries expand')
+  return linesetCalculationInput({ lineset: lineset(), venue, brickTypes: [], items: expanded.items })
+}
+
 export const hangId = (revision: number) => `7a1e0000-0000-4000-8000-00000000000${revision}`
 
 export const summary = (revision: number): HangSummary => ({
@@ -61,6 +71,7 @@ export const hangRevision = (revision: number, overrides: Partial<HangRevision> 
   linesetId: lineset().id,
   unitSystem: 'imperial',
   items: revisions[revision]!.items,
+  input: revisionInput(revisions[revision]!.items),
   result: revisions[revision]!.result,
   ...overrides,
 })

@@ -69,7 +69,7 @@ describe('pictures of the hang', () => {
     await page.emulateMedia({ media: 'screen' })
     await page.setViewportSize({ width: 1280, height: 900 })
 
-    // Saved twice, the history draws each side's saved result.
+    // Saved twice, the history draws each side from what it saved: its own items and its bending moment.
     await page.locator('[data-testid=hang-title] input').fill('Fourth electric, pictures')
     for (const [revision, quantity] of [
       [1, '10'],
@@ -84,7 +84,13 @@ describe('pictures of the hang', () => {
     const sides = page.locator('[data-testid=comparison-left-diagram], [data-testid=comparison-right-diagram]')
     await expect.poll(() => sides.count(), { timeout: 20_000 }).toBe(2)
     expect(await sides.first().locator('svg').getAttribute('aria-label')).toContain('49 ft batten on 6 lift lines')
+    const markers = (side: string) => page.locator(`[data-testid=${side}] [data-testid=diagram-item-point]`).count()
+    await expect.poll(() => markers('comparison-left-diagram')).toBe(10)
+    await expect.poll(() => markers('comparison-right-diagram')).toBe(6)
+    for (const side of ['comparison-left-diagram', 'comparison-right-diagram'])
+      expect(await page.locator(`[data-testid=${side}] [data-testid=diagram-moment]`).count()).toBe(1)
     await sides.first().screenshot({ path: join(artifacts, 'pictures-history-diagram.png') })
+    await sides.last().screenshot({ path: join(artifacts, 'pictures-history-diagram-right.png') })
   })
 
   it('when the stock page opens, then the stock chart stands beside its table', async () => {

@@ -11,6 +11,7 @@ import { venueUnitSystem } from '../venues/venue.service.js'
 import { computeHang } from './hang-calculation.js'
 import { entryFromStored, storedFromEntry } from './hang-entry.mapper.js'
 import { insertRevision, latestRevision, staleRevision } from './hang-revision.js'
+import { storedCalculationInput } from './stored-input.js'
 import type { HangModel } from './hang.model.js'
 
 /** The lineset in this venue's lists, held until the save commits so saves on one lineset take turns. */
@@ -110,6 +111,7 @@ export function saveHang(ctx: ServiceContext, linesetId: string, body: HangSave)
       totalLoad: result.totalLoad,
       unitSystem: system,
       items: body.items,
+      input,
       result,
     }
   })
@@ -140,7 +142,7 @@ export async function listHangs(ctx: ServiceContext, linesetId: string): Promise
   return rows.map((row) => summaryOf(row, system))
 }
 
-/** One saved revision with its items (in the venue's units) and the result stored with it. */
+/** One saved revision with its items (in the venue's units) and the engine input and result stored with it. */
 export async function getHang(ctx: ServiceContext, linesetId: string, hangId: string): Promise<HangRevision> {
   const system = await venueUnitSystem(ctx)
   const row = await ctx.db.models.Hang.findOne({
@@ -159,6 +161,7 @@ export async function getHang(ctx: ServiceContext, linesetId: string, hangId: st
     linesetId,
     unitSystem: system,
     items: items.map((item) => entryFromStored(item, system)),
+    input: storedCalculationInput(row.calculationInput, row.calculationResult?.units),
     result: row.calculationResult as unknown as CalculationResult,
   }
 }

@@ -37,7 +37,7 @@ describe('the plain sign-in form, before the app has loaded', () => {
       const release = await openWithAppHeld(page)
       const found = describeFindings(`plain sign-in form at ${size.width}px`, await axeFindings(page))
       expect(found, found.join('\n')).toEqual([])
-      expect(await page.evaluate(() => document.activeElement?.id)).toBe('early-sign-in-email')
+      expect(await page.evaluate('document.activeElement?.id')).toBe('early-sign-in-email')
       await page.screenshot({ path: join(artifacts, `sign-in-plain-form-${size.width}.png`) })
       release()
       await page.locator(APP_FORM).waitFor()

@@ -1,17 +1,11 @@
 import type { Request, Response } from 'express'
 import type { ServiceContext } from '../context.js'
-import { encodeAnswer, type AnswerEncoding } from '../modules/answers/answer-encodings.js'
+import { chosenEncoding, encodeAnswer, type AnswerEncoding } from '../modules/answers/answer-encodings.js'
 import { answerFingerprint } from '../modules/answers/answer-fingerprint.js'
 import { lookUpAnswer, storeAnswer } from '../modules/answers/answer-store.js'
 
 const log = (error: unknown) =>
   console.error('loftledger: answer cache:', error instanceof Error ? error.message : error)
-
-/** The encoding to send: brotli, then gzip, else the JSON as it is (as the request's Accept-Encoding allows). */
-function chosenEncoding(req: Request): AnswerEncoding {
-  const accepted = req.acceptsEncodings('br', 'gzip', 'identity')
-  return accepted === 'br' || accepted === 'gzip' ? accepted : 'identity'
-}
 
 // Sent already encoded: the compression middleware leaves an answer with a Content-Encoding alone.
 function send(res: Response, bytes: Buffer, encoding: AnswerEncoding) {
@@ -39,7 +33,7 @@ export async function sendCachedAnswer(
   name: string,
   compute: () => Promise<unknown>,
 ): Promise<void> {
-  const encoding = chosenEncoding(req)
+  const encoding = chosenEncoding(req.get('Accept-Encoding'))
   const build = await answerFingerprint()
   const key = `${build}:${name}`
   const stored = await lookUpAnswer(ctx, key, encoding)

@@ -3,7 +3,6 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { sessionCookie } from '../support/event-stream.js'
 import { currentStoredNames, freshBoard, freshList, rawGet, servedText } from '../support/answers.js'
 import { startTwoVenues, type TwoVenues } from '../support/venue-suite.js'
-import { hungLineset, saveRevision } from '../support/tickets.js'
 
 let venues: TwoVenues
 beforeAll(async () => {
@@ -60,5 +59,60 @@ describe('stored answers', () => {
     expect(await currentStoredNames(app, alpha.venueId)).toContain(`board:${production.id}`)
     expect((await atBeta['technical-director'].get(path)).status).toBe(404)
     expect((await atBeta['technical-director'].get(path)).status).toBe(404)
+  })
+})
+
+const decoded = (bytes: Buffer, encoding: unknown) =>
+  (encoding === 'br' ? brotliDecompressSync(bytes) : encoding === 'gzip' ? gunzipSync(bytes) : bytes).toString('utf8')
+
+describe('stored answers and encodings', () => {
+  it('when brotli, gzip or neither is accepted, then each comes back as the same JSON, stored or not', async () => {
+    const { app, alpha } = venues
+    const cookie = await sessionCookie(app.url, alpha.emails['stage-manager'])
+    const asked = { br: 'br', gzip: 'gzip', identity: 'identity', 'gzip, br': 'br', 'br;q=0, gzip': 'gzip' }
+    for (const [path, fresh] of [
+      ['/api/v1/linesets', () => freshList(app, alpha)],
+      ['/api/v1/board', () => freshBoard(app, alpha)],
+    ] as const)
+      for (const first of Object.keys(asked)) {
+        await sql('DELETE FROM answer_cache WHERE venue_id = $1', [alpha.venueId]) // the first read computes
+        for (const acceptEncoding of [first, ...Object.keys(asked).filter((other) => other !== first)]) {
+          const sent = asked[acceptEncoding as keyof typeof asked]
+          const res = await rawGet(`${app.url}${path}`, cookie, acceptEncoding)
+          expect(res.status).toBe(200)
+          expect(res.headers['content-encoding'] ?? 'identity', acceptEncoding).toBe(sent)
+          expect(res.headers['content-type']).toBe('application/json; charset=utf-8')
+          expect(String(res.headers.vary)).toMatch(/Accept-Encoding/i)
+          expect(res.headers['cache-control']).toBe('no-store')
+          expect(decoded(res.bytes, res.headers['content-encoding']), acceptEncoding).toBe(await fresh())
+        }
+      }
+  })
+})
+
+describe('stored answers of two venues', () => {
+  it("when one venue changes, then the other's stored answers stay current and each venue reads only its own", async () => {
+    const { app, alpha, beta, atAlpha, atBeta } = venues
+    const theirs = atBeta['stage-manager']
+    const before = {
+      list: await servedText(theirs, '/api/v1/linesets'),
+      board: await servedText(theirs, '/api/v1/board'),
+    }
+    await servedText(reader(), '/api/v1/board')
+    await atAlpha['technical-director']
+      .post(`/api/v1/linesets/${alpha.linesetId}/lockout`, { reason: 'Worn sheave' })
+      .expect(201)
+
+    expect(await currentStoredNames(app, beta.venueId)).toEqual(expect.arrayContaining(['board', 'linesets']))
+    expect(await currentStoredNames(app, alpha.venueId)).not.toContain('board')
+    expect(await servedText(theirs, '/api/v1/linesets')).toBe(before.list)
+    expect(await servedText(theirs, '/api/v1/board')).toBe(before.board)
+    expect(before.list).toBe(await freshList(app, beta))
+    expect(before.board).toBe(await freshBoard(app, beta))
+    const ours = await servedText(reader(), '/api/v1/board')
+    expect(ours).toBe(await freshBoard(app, alpha))
+    expect(ours).toContain(alpha.linesetId)
+    expect(before.board).not.toContain(alpha.linesetId)
+    expect(ours).not.toContain(beta.linesetId)
   })
 })

@@ -21,3 +21,25 @@ export async function encodeAnswer(answer: unknown): Promise<EncodedAnswer> {
   const [br, gz] = await Promise.all([brotliAsync(identity, BROTLI_STORED), gzipAsync(identity)])
   return { identity, br, gzip: gz }
 }
+
+const STORED_CODINGS = ['br', 'gzip', 'identity'] as const
+
+/**
+ * The encoding to send for an Accept-Encoding header: the stored one the request weighs highest, ties going to
+ * brotli, then gzip, then none (the compression middleware's order). The JSON as it is when the request weighs it
+ * highest or accepts neither compressed form (an absent header included).
+ */
+export function chosenEncoding(header: string | undefined): AnswerEncoding {
+  const weights = new Map<string, number>()
+  for (const part of (header ?? '').split(',')) {
+    const [coding = '', ...params] = part.split(';').map((piece) => piece.trim().toLowerCase())
+    const q = params.find((param) => param.startsWith('q='))
+    const weight = q === undefined ? 1 : Number(q.slice(2))
+    if (coding) weights.set(coding, Number.isFinite(weight) ? weight : 0)
+  }
+  const weightOf = (coding: string) => weights.get(coding) ?? (coding === 'identity' ? 0 : (weights.get('*') ?? 0))
+  let best: AnswerEncoding = 'identity'
+  for (const coding of STORED_CODINGS)
+    if (weightOf(coding) > 0 && (best === 'identity' || weightOf(coding) > weightOf(best))) best = coding
+  return best
+}

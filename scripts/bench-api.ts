@@ -27,6 +27,7 @@ import { cpuMsOf, treeCpuMs } from './lib/process-cpu.js'
 import { startCluster, stopCluster } from './lib/postgres.js'
 import { calculationOfItems } from './lib/bench-calculation.js'
 import { measureDelivery } from './lib/bench-stream.js'
+import { measureFirstReadsAfterChange } from './lib/bench-after-change.js'
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10)
 /** Runs only the targets whose name holds this (and the bare route), e.g. when profiling one. */
@@ -37,6 +38,7 @@ const STREAM_P95_TARGET_MS = 200
 const STREAM_MAX_TARGET_MS = 2000
 const OPEN_BOARDS = 20
 const STREAM_CHANGES = 40
+const AFTER_CHANGE_ROUNDS = 20
 
 /**
  * Median milliseconds of `runCalculation` (schema and engine, no HTTP, no thread) over 200 runs after 1,000: a
@@ -142,6 +144,27 @@ async function main() {
       for (const name of ['GET /api/v1/linesets', 'GET /api/v1/board']) {
         const f = figures.get(name)
         if (f) say(`${name} p95 ${f.p95Ms.toFixed(1)} ms (target < ${LIST_P95_TARGET_MS} ms)`)
+      }
+      if (!ONLY || ['GET /api/v1/linesets', 'GET /api/v1/board'].some((name) => name.includes(ONLY))) {
+        const paths = ['/api/v1/linesets', '/api/v1/board']
+        const after = await measureFirstReadsAfterChange(
+          server.url,
+          headers,
+          await firstLinesetId(server.url, headers),
+          paths,
+          AFTER_CHANGE_ROUNDS,
+        )
+        say(
+          "the list and the board above are the venue's stored answers (migration 0011), served until its data " +
+            `changes; the first read after each of ${after.changes} changes, one request at a time, computes and ` +
+            'stores them afresh: ' +
+            paths
+              .map((path) => {
+                const f = after.byPath[path]!
+                return `GET ${path} median ${f.medianMs.toFixed(1)} ms, slowest ${f.maxMs.toFixed(1)} ms`
+              })
+              .join('; '),
+        )
       }
       const delivery =
         !ONLY || 'GET /api/v1/board/stream'.includes(ONLY)

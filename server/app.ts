@@ -15,6 +15,7 @@ import { noStore, securityHeaders } from './http/headers.js'
 import { createLiveHub, type LiveHub } from './live/live-hub.js'
 import { mountedRoutes, type MountedRoute } from './http/mounted-routes.js'
 import { sessionMiddleware } from './http/session.js'
+import { answerFingerprint } from './modules/answers/answer-fingerprint.js'
 import { arborRoutes } from './modules/arbors/arbor.routes.js'
 import { attachmentRoutes, linesetAttachmentRoutes } from './modules/attachments/attachment.routes.js'
 import { boardRoutes } from './modules/board/board.routes.js'
@@ -70,6 +71,7 @@ export function createApp(config: Config, overrides: AppOverrides = {}): AppHand
   const calculations = context.calculations
   const liveHub = createLiveHub(config.databaseUrl)
   const app = express()
+  void answerFingerprint() // read now, not on the first list or board asked for
 
   app.set('trust proxy', config.trustProxy)
   app.disable('x-powered-by')

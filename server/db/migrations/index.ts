@@ -8,6 +8,7 @@ import ticketPlansDecisions from './0007-ticket-plans-decisions.js'
 import preRunChecks from './0008-pre-run-checks.js'
 import attachmentUploads from './0009-attachment-uploads.js'
 import liftLineStretch from './0010-lift-line-stretch.js'
+import answerCache from './0011-answer-cache.js'
 
 export interface Migration {
   name: string
@@ -28,4 +29,5 @@ export const migrations: Migration[] = [
   preRunChecks,
   attachmentUploads,
   liftLineStretch,
+  answerCache,
 ]

@@ -5,6 +5,7 @@ import { linesetInputSchemaFor, linesetUpdateSchemaFor } from '../../../shared/s
 import { INVENTORY_EDITORS, ROLES } from '../../../shared/schemas/role.js'
 import { memberContext, type AppContext } from '../../context.js'
 import { requireRole } from '../../http/auth.js'
+import { sendCachedAnswer } from '../../http/cached-answer.js'
 import { validate, validateByUnitsTypedIn } from '../../http/validate.js'
 import { listLinesetEvents } from './lineset-events.service.js'
 import * as linesets from './lineset.service.js'
@@ -13,7 +14,8 @@ export function linesetRoutes(app: AppContext) {
   const router = Router()
   const byId = validate({ params: idParamsSchema })
   router.get('/', requireRole(ROLES), async (req, res) => {
-    res.json(await linesets.listLinesets(memberContext(app, req)))
+    const ctx = memberContext(app, req)
+    await sendCachedAnswer(ctx, req, res, 'linesets', () => linesets.listLinesets(ctx))
   })
   router.get('/:id', requireRole(ROLES), byId, async (req, res) => {
     res.json(await linesets.getLineset(memberContext(app, req), req.params.id as string))

@@ -20,7 +20,13 @@ interface Plan {
   status?: LinesetInput['status']
   lines?: number[]
   notes?: string
+  /** Each lift line's length to its head block at the working trim, for a set whose lines are worked out stretching. */
+  lengths?: number[]
 }
+
+// The cyclorama electric's lines at its working trim: 54 ft up to the loft blocks, then across to the head block
+// 3 ft past the batten's stage-right end, so the line at 2 ft is 45 ft longer than the one at 47 ft.
+const CYC_LINE_LENGTHS = SIX_LINES.map((at) => 54 + (52 - at))
 
 const HOUSE: Plan[] = [
   { name: 'Main valance' },
@@ -51,7 +57,7 @@ const HOUSE: Plan[] = [
   { name: 'Spare', status: 'out-of-service', notes: 'Lift line at 24 ft frayed; do not use until re-roped' },
   { name: 'Upstage border' },
   { name: 'Black-out traveller' },
-  { name: 'Cyclorama electric', kind: 'counterweight-double', lines: SIX_LINES },
+  { name: 'Cyclorama electric', kind: 'counterweight-double', lines: SIX_LINES, lengths: CYC_LINE_LENGTHS },
   { name: 'Sky cloth' },
   { name: 'Upstage spare' },
   { name: 'Bounce drop' },
@@ -70,7 +76,15 @@ const HOUSE: Plan[] = [
 function figuresFor(plan: Plan, index: number): Omit<LinesetInput, 'number' | 'name' | 'status'> {
   const kind = plan.kind ?? 'counterweight-single'
   const distanceFromPlasterLine = Math.round((1.5 + index * 0.75) * 100) / 100
-  const base = { kind, distanceFromPlasterLine, notes: plan.notes ?? '', unitSystem: 'imperial' as const, ...LIFT_LINE }
+  const stretching = plan.lengths ? { liftLineLengths: plan.lengths, liftLineRope: '7x19-galvanized-1/4' } : {}
+  const base = {
+    kind,
+    distanceFromPlasterLine,
+    notes: plan.notes ?? '',
+    unitSystem: 'imperial' as const,
+    ...LIFT_LINE,
+    ...stretching,
+  }
   switch (kind) {
     case 'counterweight-single':
       return {

@@ -27,6 +27,8 @@ export interface DiagramLine {
   /** 'slack' (zero or less, or found slack), 'over' (beyond its working load limit), or null. */
   problem: 'slack' | 'over' | null
   problemText: string
+  /** Its load once the lines stretch (when the lineset gives their lengths and rope), and whether that is over the limit. */
+  stretching: { load: number; text: string; over: boolean } | null
 }
 
 export interface DiagramItem {
@@ -68,6 +70,15 @@ export function diagramLines(
     const slack = load <= 0 || !!tensionOnly?.slackLines.includes(index)
     const over = !slack && limit !== undefined && load > limit
     const problem = slack ? 'slack' : over ? 'over' : null
+    const stretchLoad = result.elasticLines?.lineLoads[index]?.load
+    const stretching =
+      stretchLoad === undefined
+        ? null
+        : {
+            load: stretchLoad,
+            text: showFigure(stretchLoad, 'weight', units),
+            over: limit !== undefined && stretchLoad > limit,
+          }
     return {
       index,
       at: line.at,
@@ -77,6 +88,7 @@ export function diagramLines(
       atText: showFigure(line.at, 'length', units),
       problem,
       problemText: slack ? 'Slack' : over ? 'Over limit' : '',
+      stretching,
     }
   })
 }
@@ -101,7 +113,11 @@ export function diagramItems(input: CalculationInput, x: (at: number) => number,
 export function diagramLabel(lines: DiagramLine[], length: number, units: UnitSystem, bendingBeyond: boolean) {
   const loads = lines
     .map(
-      (l) => `line ${l.index + 1} at ${l.atText}: ${l.loadText}${l.problem ? ` (${l.problemText.toLowerCase()})` : ''}`,
+      (l) =>
+        `line ${l.index + 1} at ${l.atText}: ${l.loadText}${l.problem ? ` (${l.problemText.toLowerCase()})` : ''}` +
+        (l.stretching
+          ? `, ${l.stretching.text} with the lines stretching${l.stretching.over ? ' (over limit)' : ''}`
+          : ''),
     )
     .join('; ')
   const bending = bendingBeyond ? ' The bending stress is beyond the allowable.' : ''

@@ -126,6 +126,50 @@ describe('BattenDiagram', () => {
     expect(wrapper.get('[data-testid="diagram-moment-caption"]').text()).toContain('BEYOND IT')
   })
 
+  it('when the lineset gives its line lengths and rope, then each line also shows its load with the lines stretching', () => {
+    const lengths = { lengths: [150, 5, 150], rope: '7x19-galvanized-1/8' }
+    const probe = engine({
+      length: 40,
+      pickPoints: [0, 20, 40],
+      items: [{ label: 'Border', weightPerLength: 5, from: 0, to: 40 }],
+      extra: { liftLine: { designFactor: 8, breakingStrength: 40000, ...lengths } },
+    })
+    const stretched = probe.result.elasticLines!.lineLoads.map((line) => line.load)
+    const rigid = probe.result.lineLoads.map((line) => line.load)
+    // Long end lines stretch more than the short middle one, so the middle takes more than its rigid share.
+    expect(stretched[1]).toBeGreaterThan(Math.max(...rigid))
+    // A limit between the heaviest rigid load and that line's stretching load: over only once the lines stretch.
+    const limit = (Math.max(...rigid) + stretched[1]!) / 2
+    const stretching = engine({
+      length: 40,
+      pickPoints: [0, 20, 40],
+      items: [{ label: 'Border', weightPerLength: 5, from: 0, to: 40 }],
+      extra: { liftLine: { designFactor: 8, breakingStrength: limit * 8, ...lengths } },
+    })
+    wrapper = mountWithApp(BattenDiagram, { props: stretching })
+    const shown = (load: number) => `${load.toLocaleString('en-US', { maximumFractionDigits: 2 })} lb`
+    stretched.forEach((load, k) => {
+      expect(wrapper!.get(`[data-testid="diagram-line-stretch-${k}"]`).text()).toBe(`~${shown(load)}`)
+      expect(wrapper!.get(`[data-testid="diagram-table-stretch-${k}"]`).text()).toContain(shown(load))
+    })
+    expect(wrapper.get('[data-testid="diagram-table-stretch-1"]').classes()).toContain('batten-diagram--danger')
+    expect(wrapper.get('[data-testid="diagram-table-stretch-0"]').classes()).not.toContain('batten-diagram--danger')
+    expect(wrapper.get('svg').attributes('aria-label')).toContain(
+      `${shown(stretched[1]!)} with the lines stretching (over limit)`,
+    )
+    expect(wrapper.get('[data-testid="diagram-dangers"]').text()).toContain(
+      `With the lines stretching, line 2 carries ${shown(stretched[1]!)}, over its working load limit.`,
+    )
+    expect(wrapper.get('[data-testid="diagram-stretch-note"]').text()).toContain(probe.result.elasticLines!.basis)
+  })
+
+  it('when the lines are rigid, then no stretching figures or column appear', () => {
+    wrapper = mountWithApp(BattenDiagram, { props: even })
+    expect(wrapper.find('[data-testid="diagram-line-stretch-0"]').exists()).toBe(false)
+    expect(wrapper.get('[data-testid="diagram-table"]').findAll('thead th')).toHaveLength(3)
+    expect(wrapper.find('[data-testid="diagram-stretch-note"]').exists()).toBe(false)
+  })
+
   it('when the same lines hang on a batten twice as long, then every line sits at half the distance along the drawing', () => {
     const short = engine({ length: 20, pickPoints: [0, 5, 10], items: [] })
     const long = engine({ length: 40, pickPoints: [0, 5, 10], items: [] })

@@ -1,6 +1,5 @@
 import type { Decimal } from 'decimal.js'
-import { Dec } from './decimal.js'
-import { unitLabel, type Quantity, type UnitSystem } from './systems.js'
+import { unitLabel, type Quantity, type UnitSystem } from './labels.js'
 
 /**
  * The one display-rounding rule: how many decimals a figure of each quantity is shown with, in lists, forms'
@@ -19,6 +18,42 @@ export const DISPLAY_PLACES: Readonly<Record<Quantity, number>> = {
   stress: 2,
 }
 
+const DECIMAL_TEXT = /^([+-]?)(\d*)(?:\.(\d*))?(?:e([+-]?\d+))?$/i
+/** Beyond this many whole digits a figure is written as given: no venue's figure comes near it. */
+const MAX_WHOLE_DIGITS = 400
+
+/**
+ * Rounds the decimal a text writes (a JS number's own shortest text, a decimal string, or a Decimal's) half away
+ * from zero, digit by digit on the text, so no binary fraction creeps in: 2.005 rounds to 2.01 as written.
+ * Works on strings, not on the decimal library, so screens that only show figures do not load it.
+ */
+function roundText(text: string, places: number): { negative: boolean; whole: string; fraction: string } | string {
+  const parts = DECIMAL_TEXT.exec(text.trim())
+  if (!parts || `${parts[2]}${parts[3] ?? ''}` === '') throw new TypeError(`Not a figure: ${text}`)
+  const [, sign, whole = '', fraction = '', exponent = '0'] = parts
+  // The figure is 0.<digits> x 10^point once the leading zeros are gone.
+  const written = `${whole}${fraction}`
+  const digits = written.replace(/^0+/, '')
+  const point = whole.length + Number(exponent) - (written.length - digits.length)
+  if (digits === '' || point < -places) return { negative: false, whole: '0', fraction: '' }
+  if (point > MAX_WHOLE_DIGITS) return text
+  // Every digit up to the one after the last kept place, zeros filled in; then cut there and carry.
+  const padded = '0'.repeat(Math.max(0, -point)) + digits
+  const at = Math.max(point, 0) + places
+  const full = padded.padEnd(at + 1, '0')
+  const kept = [...full.slice(0, at)].map(Number)
+  if (Number(full[at]) >= 5) {
+    let k = kept.length - 1
+    while (k >= 0 && kept[k] === 9) kept[k--] = 0
+    if (k >= 0) kept[k]! += 1
+    else kept.unshift(1)
+  }
+  const all = kept.join('')
+  const wholeDigits = all.slice(0, all.length - places).replace(/^0+(?=\d)/, '') || '0'
+  const fractionDigits = all.slice(all.length - places)
+  return { negative: sign === '-' && /[1-9]/.test(all), whole: wholeDigits, fraction: fractionDigits }
+}
+
 /**
  * A number rounded half away from zero to `places`, thousands separated, trailing zeros dropped.
  *
@@ -27,12 +62,13 @@ export const DISPLAY_PLACES: Readonly<Record<Quantity, number>> = {
  * displayNumber('-1234.5', 2) // '-1,234.5'
  */
 export function displayNumber(value: Decimal.Value, places: number): string {
-  const rounded = Dec(value).toDecimalPlaces(places, Dec.ROUND_HALF_UP)
-  // A decimal's toFixed never turns to exponent notation, however large the figure.
-  const [whole, fraction = ''] = rounded.abs().toFixed(places).split('.') as [string, string?]
-  const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',')
-  const tail = fraction.replace(/0+$/, '')
-  return `${rounded.isNegative() && !rounded.isZero() ? '-' : ''}${grouped}${tail ? `.${tail}` : ''}`
+  if (typeof value === 'number' && !Number.isFinite(value)) return String(value)
+  const text = typeof value === 'number' ? String(value) : value.toString()
+  const rounded = roundText(text, places)
+  if (typeof rounded === 'string') return rounded
+  const grouped = rounded.whole.replace(/\B(?=(\d{3})+(?!\d))/g, ',')
+  const tail = rounded.fraction.replace(/0+$/, '')
+  return `${rounded.negative ? '-' : ''}${grouped}${tail ? `.${tail}` : ''}`
 }
 
 /**

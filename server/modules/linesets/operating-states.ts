@@ -1,7 +1,7 @@
 import { arborWeight, outOfBalanceAtBatten } from '../../../shared/engine/arbor-balance.js'
 import { purchaseRatio } from '../../../shared/engine/counterweight.js'
 import { isCounterweightKind, type LinesetOperating } from '../../../shared/schemas/lineset.js'
-import { operatingStatus } from '../../../shared/schemas/operating-status.js'
+import { operatingStatus } from '../../../shared/schemas/operating-status-rule.js'
 import { inTransaction, type ServiceContext } from '../../context.js'
 import { storedFromApi } from '../../db/quantities.js'
 import { operatingFacts } from './operating-facts.js'

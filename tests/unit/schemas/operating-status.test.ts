@@ -1,11 +1,7 @@
 import { describe, expect, it } from 'vitest'
 import { arborWeight, outOfBalanceAtBatten } from '../../../shared/engine/arbor-balance.js'
-import {
-  OPERATING_STATUSES,
-  OPERATING_STATUS_LOOK,
-  operatingStatus,
-  type OperatingFacts,
-} from '../../../shared/schemas/operating-status.js'
+import { OPERATING_STATUSES, OPERATING_STATUS_LOOK } from '../../../shared/schemas/operating-status.js'
+import { operatingStatus, type OperatingFacts } from '../../../shared/schemas/operating-status-rule.js'
 
 const calm: OperatingFacts = {
   status: 'in-service',

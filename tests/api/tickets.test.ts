@@ -134,6 +134,24 @@ describe('opening a ticket', () => {
     expect(await operatingStatusOf(stageManager, linesetId)).not.toBe('awaiting-approval')
   })
 
+  it('when the hang has a finding that says stop, then no ticket opens and the 409 gives the findings in words', async () => {
+    // 200 lb drop + 108.8 lb of batten = 308.8 lb against a rated load of 250 lb (invented test data).
+    const { id: linesetId, hang } = await hung(200, { ratedLoad: 250 })
+    const saved = (await operator.get(`/api/v1/linesets/${linesetId}/hangs/${hang.id}`).expect(200)).body
+    const stops = saved.result.checks.filter((check: { level: string }) => check.level === 'danger')
+    expect(stops.map((check: { code: string }) => check.code)).toContain('over-rated-load')
+    const before = (await director.get('/api/v1/tickets').expect(200)).body.length
+    const res = await open(operator, hang.id)
+    expect(res.status).toBe(409)
+    expect(res.body.error.code).toBe('hang_has_dangers')
+    expect(res.body.error.message).toMatch(
+      /^No ticket can open on lineset \d+ while its hang has (a finding that says|\d+ findings that say) stop: /,
+    )
+    for (const stop of stops) expect(res.body.error.message).toContain(stop.message)
+    expect((await director.get('/api/v1/tickets').expect(200)).body).toHaveLength(before)
+    expect(await operatingStatusOf(stageManager, linesetId)).not.toBe('awaiting-approval')
+  })
+
   it("when another venue's hang is named, then it answers 404; a stage manager is refused with 403", async () => {
     const { hang } = await hung()
     expect((await open(otherVenue, hang.id)).status).toBe(404)
@@ -153,6 +171,32 @@ describe('deciding', () => {
     expect(res.status).toBe(403)
     expect(res.body.error.message).toMatch(/Nobody decides a ticket they opened/)
     expect((await act(admin, own.id, 'approve', { version: 0 })).status).toBe(200)
+  })
+
+  it('when a ticket waits on a hang saved with a finding that says stop, then approval is refused and nothing moves', async () => {
+    const { ticket, hang } = await openedTicket()
+    // As a ticket opened before tickets were refused on such hangs: its revision's stored result says stop.
+    const stop = {
+      code: 'line-over-limit',
+      level: 'danger',
+      message: 'Line 3 carries 1,527 lb, over its working load limit',
+    }
+    await app.handle.db.sequelize.query(
+      `UPDATE hangs SET calculation_result = jsonb_set(calculation_result, '{checks}',
+              (calculation_result->'checks') || $2::jsonb) WHERE id = $1`,
+      { bind: [hang.id, JSON.stringify([stop])] },
+    )
+    const before = await stockLine(director, alpha.brickTypeId)
+    const res = await act(director, ticket.id, 'approve', { version: 0 })
+    expect(res.status).toBe(409)
+    expect(res.body.error.code).toBe('hang_has_dangers')
+    expect(res.body.error.message).toContain(`${stop.message}.`)
+    expect((await director.get(`/api/v1/tickets/${ticket.id}`).expect(200)).body).toMatchObject({
+      state: 'requested',
+      version: 0,
+    })
+    expect(await stockLine(director, alpha.brickTypeId)).toEqual(before)
+    expect((await act(director, ticket.id, 'decline', { version: 0, comment: 'Over the line limit' })).status).toBe(200)
   })
 
   it('when a director approves, then the bricks are reserved, the opener is mailed with the link, and a second decision names the state', async () => {

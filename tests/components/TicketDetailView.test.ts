@@ -3,7 +3,9 @@ import { flushPromises, type VueWrapper } from '@vue/test-utils'
 import { createPinia, setActivePinia } from 'pinia'
 import type { Role, TicketView } from '../../shared/schemas/index.js'
 import { ApiError } from '../../src/api/errors'
+import { hangsApi } from '../../src/api/hangs'
 import { ticketsApi } from '../../src/api/tickets'
+import type { Check } from '../../shared/schemas/calculation-result.js'
 import { useSessionStore } from '../../src/stores/session'
 import TicketDetailView from '../../src/views/TicketDetailView.vue'
 import { personWith } from './fixtures'
@@ -24,14 +26,18 @@ vi.mock('../../src/api/tickets', () => ({
   },
 }))
 
+vi.mock('../../src/api/hangs', () => ({ hangsApi: { list: vi.fn(), read: vi.fn(), save: vi.fn() } }))
+
 let wrapper: VueWrapper | undefined
 afterEach(() => {
   wrapper?.unmount()
   vi.clearAllMocks()
 })
 
-async function openTicket(role: Role, shown: TicketView) {
+/** Opens the ticket page; `checks` are the findings stored with the ticket's hang revision. */
+async function openTicket(role: Role, shown: TicketView, checks: Check[] = []) {
   vi.mocked(ticketsApi.get).mockResolvedValue(shown)
+  vi.mocked(hangsApi.read).mockResolvedValue({ result: { checks } } as never)
   const pinia = createPinia()
   setActivePinia(pinia)
   useSessionStore().user = personWith(role)
@@ -48,6 +54,31 @@ const click = async (w: VueWrapper, id: string) => {
 }
 
 describe('TicketDetailView: deciding', () => {
+  it('when the hang says stop, then the director reads why and approval is held back while declining stays open', async () => {
+    const over = 'The batten carries 1,631 lb, over its rated load of 1,200 lb'
+    const w = await openTicket('technical-director', ticket(), [
+      { code: 'over-rated-load', level: 'danger', message: over },
+      { code: 'travel-shift', level: 'caution', message: 'Look again at the out trim' },
+      { code: 'note', level: 'info', message: 'Not shown' },
+    ])
+    expect(hangsApi.read).toHaveBeenCalledWith(ticket().linesetId, ticket().hangId)
+    const findings = w.get('[data-testid="ticket-hang-findings"]').text()
+    expect(findings).toContain(over)
+    expect(findings).toContain('Look again at the out trim')
+    expect(findings).not.toContain('Not shown')
+    expect(has(w, 'ticket-hang-stops')).toBe(true)
+    expect(has(w, 'ticket-decision-stops')).toBe(true)
+    expect(w.get('[data-testid="ticket-approve"]').attributes('disabled')).toBeDefined()
+    expect(w.get('[data-testid="ticket-decline"]').attributes('disabled')).toBeUndefined()
+  })
+
+  it('when the hang is clear, then the page says so and approval is offered', async () => {
+    const w = await openTicket('technical-director', ticket())
+    expect(has(w, 'ticket-hang-clear')).toBe(true)
+    expect(has(w, 'ticket-decision-stops')).toBe(false)
+    expect(w.get('[data-testid="ticket-approve"]').attributes('disabled')).toBeUndefined()
+  })
+
   it('when a director reads a ticket storage cannot cover, then the shortfall shows before deciding and approval is not offered', async () => {
     const w = await openTicket(
       'technical-director',

@@ -12,7 +12,7 @@ import { testRouter } from './router'
 import { ticket } from './ticketFixtures'
 
 vi.mock('../../src/api/tickets', () => ({ ticketsApi: { list: vi.fn(), open: vi.fn(), get: vi.fn() } }))
-vi.mock('../../src/api/hangs', () => ({ hangsApi: { list: vi.fn() } }))
+vi.mock('../../src/api/hangs', () => ({ hangsApi: { list: vi.fn(), read: vi.fn() } }))
 
 let wrapper: VueWrapper | undefined
 afterEach(() => {
@@ -65,8 +65,11 @@ describe('LinesetTicketRequest', () => {
     totalLoad: 300,
   }
 
+  const savedWith = (checks: object[]) => vi.mocked(hangsApi.read).mockResolvedValue({ result: { checks } } as never)
+
   it('when a fly operator asks for the latest revision’s change, then the ticket opens and its page follows', async () => {
     vi.mocked(hangsApi.list).mockResolvedValue([latest])
+    savedWith([])
     vi.mocked(ticketsApi.list).mockResolvedValue([])
     vi.mocked(ticketsApi.open).mockResolvedValue(ticket())
     const { router } = mountAs('fly-operator', LinesetTicketRequest as never, { lineset: set })
@@ -78,8 +81,32 @@ describe('LinesetTicketRequest', () => {
     expect(router.currentRoute.value.name).toBe('ticket-detail')
   })
 
+  it('when the latest revision says stop, then its findings show and asking is not offered', async () => {
+    vi.mocked(hangsApi.list).mockResolvedValue([latest])
+    vi.mocked(ticketsApi.list).mockResolvedValue([])
+    savedWith([{ code: 'line-over-limit', level: 'danger', message: 'Line 3 carries 1,527 lb, over its limit' }])
+    mountAs('fly-operator', LinesetTicketRequest as never, { lineset: set })
+    await flushPromises()
+    expect(hangsApi.read).toHaveBeenCalledWith(set.id, 'h3')
+    expect(wrapper!.get('[data-testid="lineset-ask-stops"]').text()).toContain(
+      'Line 3 carries 1,527 lb, over its limit',
+    )
+    expect(wrapper!.find('[data-testid="lineset-ask-change"]').exists()).toBe(false)
+  })
+
+  it('when the latest revision has been loaded already, then asking again says so', async () => {
+    vi.mocked(hangsApi.list).mockResolvedValue([latest])
+    vi.mocked(ticketsApi.list).mockResolvedValue([ticket({ state: 'loaded', hangId: 'h3' })])
+    savedWith([])
+    mountAs('fly-operator', LinesetTicketRequest as never, { lineset: set })
+    await flushPromises()
+    expect(wrapper!.get('[data-testid="lineset-latest-revision"]').text()).toContain('loaded already')
+    expect(wrapper!.get('[data-testid="lineset-ask-change"]').text()).toBe('Ask again for this change')
+  })
+
   it('when the lineset has an open ticket, then it links to it instead; a stage manager is never offered to ask', async () => {
     vi.mocked(hangsApi.list).mockResolvedValue([latest])
+    savedWith([])
     vi.mocked(ticketsApi.list).mockResolvedValue([ticket({ state: 'approved' })])
     mountAs('fly-operator', LinesetTicketRequest as never, { lineset: set })
     await flushPromises()

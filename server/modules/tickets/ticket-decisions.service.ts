@@ -3,6 +3,7 @@ import { inTransaction, type ServiceContext, type TransactionContext } from '../
 import { AppError } from '../../http/errors.js'
 import { releaseReservation, reserveBricks } from '../brick-stock/brick-stock.service.js'
 import { changesOf, markReserved, ticketBricks } from './ticket-bricks.js'
+import { refuseDangerousHang } from './ticket-dangers.js'
 import { recordTicketStep } from './ticket-ledger.js'
 import { mailTicketDecided } from './ticket-mail.js'
 import { readTicket } from './ticket-read.service.js'
@@ -34,11 +35,12 @@ async function decideTicket(
 
 /**
  * Approves a requested ticket and reserves the bricks it adds, or refuses with 409 naming the brick type and
- * how many are missing (nothing written). Written conditional on the state and version it starts from.
+ * how many are missing, or the hang's findings that say stop (nothing written). Written conditional on the state and version it starts from.
  */
 export function approveTicket(ctx: ServiceContext, id: string, body: TicketApprove): Promise<TicketView> {
   return inTransaction(ctx, async (tx) => {
     const ticket = await decideTicket(tx, id, 'approved', body)
+    await refuseDangerousHang(tx, ticket)
     const bricks = await ticketBricks(tx, id)
     await reserveBricks(
       tx,

@@ -4,6 +4,7 @@ import type { TransactionContext } from '../../context.js'
 import { apiFromStored, storedFromApi } from '../../db/quantities.js'
 import { AppError } from '../../http/errors.js'
 import { rows } from '../brick-stock/stock-sql.js'
+import { dangersOf } from './ticket-dangers.js'
 
 /** One brick type in a plan: what the arbor holds now, what it should hold after, and the signed change. */
 export interface PlannedBrick {
@@ -64,6 +65,15 @@ export async function planTicket(
   // A batten that cannot hang level has no plan to load: say why rather than that the figures are missing.
   const tips = outcome.ok ? outcome.result.checks.find((found) => found.code === 'batten-tips') : undefined
   if (tips) throw new AppError(409, 'batten_tips', `No ticket can open on lineset ${lineset.number}: ${tips.message}`)
+  // A finding that says stop (a line or the batten over its rating, the arbor unable to balance it with the
+  // bricks free now, a slack line...) means nobody should load this hang: no ticket, so nobody can approve one.
+  const stops = outcome.ok ? dangersOf(outcome.result.checks) : []
+  if (stops.length)
+    throw new AppError(
+      409,
+      'hang_has_dangers',
+      `No ticket can open on lineset ${lineset.number} while its hang has ${stops.length === 1 ? 'a finding that says' : `${stops.length} findings that say`} stop: ${stops.join(' ')} Change the hang or the lineset, or free the bricks it needs, and save a new revision.`,
+    )
   const counterweight = outcome.ok ? outcome.result.counterweight : undefined
   if (!counterweight)
     throw new AppError(

@@ -12,6 +12,8 @@ export interface OperatingFacts {
   lockedOut: boolean
   /** The state of the lineset's open change ticket (requested, approved or loading), if it has one. */
   openTicket: TicketState | null
+  /** Whether the current hang's saved figures include a finding that says stop (over a rating, a slack line...). */
+  hangSaysStop?: boolean
   /** What the crew felt at the rail the last time weight moved, if it has. */
   feltBalance: FeltBalance | null
   /** Signed out of balance at the batten for the current hang and the arbor as counted; null when unknown. */
@@ -22,7 +24,7 @@ export interface OperatingFacts {
 
 /**
  * A lineset's operating status. Out of service and locked out come first (nobody operates it, whatever
- * else holds); then a ticket being loaded; then a ticket awaiting a decision, which explains why the arbor
+ * else holds); then a current hang whose figures say stop (no ticket can balance it); then a ticket being loaded; then a ticket awaiting a decision, which explains why the arbor
  * does not yet match a newly saved hang; then an imbalance the rail reported or the figures show; else ready.
  * A lineset needing inspection keeps its own status beside this one.
  *
@@ -33,6 +35,7 @@ export interface OperatingFacts {
 export function operatingStatus(facts: OperatingFacts): OperatingStatus {
   if (facts.status === 'out-of-service') return 'out-of-service'
   if (facts.lockedOut) return 'locked-out'
+  if (facts.hangSaysStop) return 'unsafe-hang'
   if (facts.openTicket === 'loading') return 'loading'
   if (facts.openTicket === 'requested') return 'awaiting-approval'
   if (facts.feltBalance && facts.feltBalance !== 'balanced') return 'out-of-balance'

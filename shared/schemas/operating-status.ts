@@ -5,6 +5,7 @@
 export const OPERATING_STATUSES = [
   'out-of-service',
   'locked-out',
+  'unsafe-hang',
   'loading',
   'awaiting-approval',
   'out-of-balance',
@@ -20,6 +21,7 @@ export const OPERATING_STATUS_LOOK: Readonly<Record<OperatingStatus, { label: st
     loading: { label: 'Loading, do not operate', icon: 'mdi-weight', color: 'warning' },
     'out-of-balance': { label: 'Out of balance, do not operate', icon: 'mdi-scale-unbalanced', color: 'error' },
     'locked-out': { label: 'Locked out', icon: 'mdi-lock-outline', color: 'error' },
+    'unsafe-hang': { label: 'Unsafe hang, do not operate', icon: 'mdi-alert-octagon-outline', color: 'error' },
     'out-of-service': { label: 'Out of service', icon: 'mdi-cancel', color: 'secondary' },
   }
 

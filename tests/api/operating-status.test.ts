@@ -42,6 +42,28 @@ const count = (id: string, bricks: number, version = 0) =>
     .expect(200)
 
 describe('operating status in the lineset list', () => {
+  it('when the current hang says stop, then the list, the lineset and the board all read unsafe hang', async () => {
+    // 200 lb drop + 108.8 lb of batten = 308.8 lb against a rated load of 250 lb (invented test data).
+    const { id, hang } = await hungLineset({ ratedLoad: 250 })
+    expect(hang.result.checks).toContainEqual(expect.objectContaining({ code: 'over-rated-load', level: 'danger' }))
+    await count(id, 5)
+    expect(await statusOf(id)).toBe('unsafe-hang')
+    expect((await operator.get(`/api/v1/linesets/${id}`)).body.operatingStatus).toBe('unsafe-hang')
+    const board = (await operator.get('/api/v1/board').expect(200)).body.linesets as { id: string }[]
+    expect(board.find((row) => row.id === id)).toMatchObject({ operatingStatus: 'unsafe-hang' })
+    // Only a new revision whose figures are clear ends it: 120 + 108.8 = 228.8 lb, within the 250 lb rating and
+    // above the 200 lb of arbor frame and pipe weight.
+    await operator
+      .post(`/api/v1/linesets/${id}/hangs`, {
+        title: 'A lighter drop',
+        basedOnRevision: 1,
+        items: [{ label: 'Drop', category: 'scenery', weight: 120, at: 20 }],
+        unitSystem: 'imperial',
+      })
+      .expect(201)
+    expect(await statusOf(id)).not.toBe('unsafe-hang')
+  })
+
   it('when the arbor holds the engine’s plan for the current hang, then the set is ready', async () => {
     const { id, hang } = await hungLineset()
     expect(hang.result.counterweight.bricks).toEqual([expect.objectContaining({ name: 'Full', count: 5 })])

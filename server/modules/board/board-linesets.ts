@@ -31,6 +31,7 @@ export function boardOperatingStatus(row: BoardRow, tolerance: string) {
     status: row.status,
     lockedOut: row.lockedOutAt !== null,
     openTicket: row.openTicket,
+    hangSaysStop: row.hangStops > 0,
     feltBalance: row.feltBalance,
     outOfBalance,
     tolerance,

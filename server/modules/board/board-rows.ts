@@ -35,6 +35,8 @@ export interface BoardRow {
   hangUnits: UnitSystem | null
   /** The engine's batten side, in the hang's units. */
   battenSide: number | null
+  /** How many of the current hang's saved findings say stop. */
+  hangStops: number
   changeId: string | null
   changeType: string | null
   changeAt: Date | null
@@ -76,6 +78,8 @@ export function boardRows(
             h.total_load::float8 AS "hangTotalLoad",
             h.total_load::text AS "hangTotalLoadExact", h.production_id AS "hangProductionId", h.unit_system AS "hangUnits",
             (h.calculation_result -> 'counterweight' ->> 'battenSide')::float8 AS "battenSide",
+            (SELECT count(*) FROM jsonb_array_elements(coalesce(h.calculation_result -> 'checks', '[]'::jsonb)) c
+              WHERE c ->> 'level' = 'danger')::int AS "hangStops",
             ${lastChange ? LAST_CHANGE_COLUMNS : NO_LAST_CHANGE}
        FROM linesets l
        LEFT JOIN users lu ON lu.id = l.locked_out_by

@@ -40,10 +40,12 @@ export async function operatingFacts(tx: TransactionContext, linesetId?: string)
       WHERE venue_id = $1 AND state IN ('requested', 'approved', 'loading') AND ${only('lineset_id')}`,
     bind,
   )
-  const hangs = await rows<{ linesetId: string; units: UnitSystem; battenSide: number | null }>(
+  const hangs = await rows<{ linesetId: string; units: UnitSystem; battenSide: number | null; stops: number }>(
     tx,
     `SELECT DISTINCT ON (lineset_id) lineset_id AS "linesetId", unit_system AS units,
-            (calculation_result -> 'counterweight' ->> 'battenSide')::float8 AS "battenSide"
+            (calculation_result -> 'counterweight' ->> 'battenSide')::float8 AS "battenSide",
+            (SELECT count(*) FROM jsonb_array_elements(coalesce(calculation_result -> 'checks', '[]'::jsonb)) c
+              WHERE c ->> 'level' = 'danger')::int AS stops
        FROM hangs WHERE venue_id = $1 AND ${only('lineset_id')} ORDER BY lineset_id, revision DESC`,
     bind,
   )
@@ -69,5 +71,6 @@ export async function operatingFacts(tx: TransactionContext, linesetId?: string)
   )
   const arbors = new Map<string, { unitWeight: string; count: number }[]>()
   for (const brick of bricks) arbors.set(brick.linesetId, [...(arbors.get(brick.linesetId) ?? []), brick])
-  return { linesets, openTickets, battenSides, arbors, tolerance: venue!.tolerance }
+  const hangsSayingStop = new Set(hangs.filter((hang) => hang.stops > 0).map((hang) => hang.linesetId))
+  return { linesets, openTickets, battenSides, arbors, hangsSayingStop, tolerance: venue!.tolerance }
 }

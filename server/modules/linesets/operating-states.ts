@@ -33,6 +33,7 @@ export function operatingStates(ctx: ServiceContext, linesetId?: string): Promis
           status: lineset.status,
           lockedOut: lineset.lockedOutAt !== null,
           openTicket: facts.openTickets.get(lineset.id) ?? null,
+          hangSaysStop: facts.hangsSayingStop.has(lineset.id),
           feltBalance: lineset.feltBalance,
           outOfBalance,
           tolerance: facts.tolerance,

@@ -52,6 +52,16 @@ describe('operating status', () => {
     expect(operatingStatus({ ...everything, status: 'in-service', lockedOut: false })).toBe('loading')
   })
 
+  it('when the current hang says stop, then it is an unsafe hang, below a lock-out and above everything else', () => {
+    expect(operatingStatus({ ...calm, hangSaysStop: true })).toBe('unsafe-hang')
+    expect(operatingStatus({ ...calm, hangSaysStop: true, openTicket: 'loading', outOfBalance: 99 })).toBe(
+      'unsafe-hang',
+    )
+    expect(operatingStatus({ ...calm, hangSaysStop: true, lockedOut: true })).toBe('locked-out')
+    expect(operatingStatus({ ...calm, hangSaysStop: true, status: 'out-of-service' })).toBe('out-of-service')
+    expect(operatingStatus({ ...calm, hangSaysStop: false })).toBe('ready')
+  })
+
   it('when a status is shown, then it has words, an icon and a colour, never colour alone', () => {
     for (const status of OPERATING_STATUSES) {
       const look = OPERATING_STATUS_LOOK[status]

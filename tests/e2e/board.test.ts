@@ -66,7 +66,9 @@ describe('the stage manager watches the board before a run', () => {
     // A safety status reads in full at phone width: no chip's words run past its box.
     expect(await clippedStatusChips(page)).toEqual([])
 
-    await director.delete(`/api/v1/linesets/${target.id}/lockout`).expect(204)
+    await director
+      .delete(`/api/v1/linesets/${target.id}/lockout`, { reason: 'Rope lock adjusted and tested' })
+      .expect(204)
     await page.close()
   })
 

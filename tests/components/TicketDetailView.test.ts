@@ -28,6 +28,7 @@ let wrapper: VueWrapper | undefined
 afterEach(() => {
   wrapper?.unmount()
   vi.clearAllMocks()
+  sessionStorage.clear() // ticks kept on the tab would carry into the next test's ticket
 })
 
 async function openTicket(role: Role, shown: TicketView) {

@@ -97,5 +97,8 @@ describe('LinesetLockoutPanel', () => {
     expect(messagesUnder('lockout-release-reason')).toBe('What was checked or fixed must not be empty')
     expect(w.get('[data-testid="lockout-current"]').text()).toContain('Lift line frayed')
     expect(w.emitted('changed')).toBeUndefined()
+    typeInto('lockout-release-reason', 'Lift line replaced')
+    await flushPromises()
+    expect(messagesUnder('lockout-release-reason')).toBe("Kept in the lineset's history with the lock-out")
   })
 })

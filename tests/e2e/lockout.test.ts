@@ -6,6 +6,14 @@ import { signedIn } from '../support/test-app.js'
 
 const suite = demoInBrowser()
 
+/** The part of the browser's Web Animations API the test reads (the Node typings carry no DOM animations). */
+interface Animated {
+  getAnimations(options: { subtree: boolean }): {
+    effect: { getComputedTiming(): { endTime?: number | string } } | null
+    finished: Promise<unknown>
+  }[]
+}
+
 describe('the technical director locks a set out and releases it', () => {
   it('when the lock-out is released, then the page asks to confirm with what was checked, and the history keeps both reasons', async () => {
     const director = await signedIn(suite.app.url, 'td@demo.test', DEMO_PASSWORD)
@@ -41,7 +49,7 @@ describe('the technical director locks a set out and releases it', () => {
       .toBe("Kept in the lineset's history with the lock-out")
     await field.evaluate((element) =>
       Promise.all(
-        element
+        (element as unknown as Animated)
           .getAnimations({ subtree: true })
           .filter((animation) => animation.effect?.getComputedTiming().endTime !== Infinity)
           .map((animation) => animation.finished),

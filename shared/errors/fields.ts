@@ -25,6 +25,25 @@ export function fieldsFromIssues(issues: ReadonlyArray<IssueLike>): Record<strin
   return fields
 }
 
+/** How many field messages a summary repeats before it only counts the rest. */
+const SUMMARY_MESSAGES = 3
+
+/**
+ * One sentence for a person from the field messages, which carry their own labels ("Reason must not be empty"):
+ * the field paths (`loaded.0.count`) stay in `fields` for screens and programs, never in the words.
+ *
+ * @example
+ * fieldsSummary({ reason: 'Reason must not be empty' }) // 'Reason must not be empty.'
+ */
+export function fieldsSummary(fields: Readonly<Record<string, string>>): string {
+  const messages = [...new Set(Object.values(fields).map((message) => message.replace(/[.\s]+$/, '')))]
+  if (messages.length === 0) return 'Something in the form needs a change.'
+  if (messages.length === 1) return `${messages[0]}.`
+  const shown = messages.slice(0, SUMMARY_MESSAGES).join('; ')
+  const rest = messages.length - SUMMARY_MESSAGES
+  return `${messages.length} entries need a change: ${shown}${rest > 0 ? `; and ${rest} more` : ''}.`
+}
+
 /**
  * The error body for input that failed validation.
  *
@@ -33,7 +52,5 @@ export function fieldsFromIssues(issues: ReadonlyArray<IssueLike>): Record<strin
  */
 export function validationErrorBody(issues: ReadonlyArray<IssueLike>): ErrorBody {
   const fields = fieldsFromIssues(issues)
-  const names = Object.keys(fields)
-  const message = `Check ${names.length === 1 ? 'this field' : 'these fields'}: ${names.join(', ')}`
-  return { error: { code: 'validation_failed', message, fields } }
+  return { error: { code: 'validation_failed', message: fieldsSummary(fields), fields } }
 }

@@ -1,5 +1,6 @@
 import { getActivePinia, type Pinia, type PiniaPluginContext } from 'pinia'
 import { setCsrfToken } from '../api/client'
+import { forgetLoadingTicks } from '../composables/loadingTicks'
 
 type Reset = () => void
 
@@ -23,8 +24,12 @@ export function forgetfulStores({ pinia, store }: PiniaPluginContext) {
   )
 }
 
-/** Drops everything read for the person who was signed in (every store, and the API token), so the next person sees none of it. */
+/**
+ * Drops everything read for the person who was signed in (every store, the API token and the loading ticks kept
+ * on the tab), so the next person sees none of it.
+ */
 export function forgetSignedInData(pinia: Pinia | undefined = getActivePinia()) {
   if (pinia) for (const reset of resetsByPinia.get(pinia)?.values() ?? []) reset()
   setCsrfToken('')
+  forgetLoadingTicks()
 }

@@ -146,8 +146,10 @@ describe('the board stream', () => {
     await theirs.next((event) => event.event === 'lockout')
     const linesetIds = theirs.heard.flatMap((event) => (event.data?.linesetId ? [event.data.linesetId] : []))
     expect(linesetIds).toEqual([beta.linesetId])
-    await director.delete(`/api/v1/linesets/${alpha.linesetId}/lockout`).expect(204)
-    await betaDirector.delete(`/api/v1/linesets/${beta.linesetId}/lockout`).expect(204)
+    await director.delete(`/api/v1/linesets/${alpha.linesetId}/lockout`, { reason: 'Checked and cleared' }).expect(204)
+    await betaDirector
+      .delete(`/api/v1/linesets/${beta.linesetId}/lockout`, { reason: 'Checked and cleared' })
+      .expect(204)
   })
 
   it('when a board reconnects with Last-Event-ID, then it first hears every change it missed, in order', async () => {
@@ -200,7 +202,7 @@ describe('the board stream', () => {
     const after = await stream(second, alpha.emails['stage-manager'], quick.id!)
     const caught = await after.next((event) => event.data?.id === slowId)
     expect(caught).toMatchObject({ event: 'lineset', data: { linesetId: alpha.linesetId, type: 'lineset-changed' } })
-    await director.delete(`/api/v1/linesets/${alpha.linesetId}/lockout`).expect(204)
+    await director.delete(`/api/v1/linesets/${alpha.linesetId}/lockout`, { reason: 'Checked and cleared' }).expect(204)
   })
 
   it('when a board stays open, then it hears a keep-alive comment line at the configured interval', async () => {

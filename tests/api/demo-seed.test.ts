@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest'
 import { seedDemoIfEmpty } from '../../server/db/seeders/demo.js'
-import { DEMO_LINESETS } from '../../server/db/seeders/demo-linesets.js'
+import { DEMO_LINESETS, HEMP_LINE } from '../../server/db/seeders/demo-linesets.js'
+import { workingLoadLimit } from '../../shared/engine/capacity-checks.js'
 import { DEMO_PASSWORD } from '../../server/db/seeders/demo-people.js'
 import { signedIn, startTestApp, type TestApp } from '../support/test-app.js'
 
@@ -51,6 +52,26 @@ describe('the demo venue', () => {
     const library = (await reader.get('/api/v1/item-types').expect(200)).body as { notes: string }[]
     expect(library.length).toBeGreaterThan(5)
     for (const item of library) expect(item.notes).toMatch(/^Demo data/)
+  })
+
+  it('when a hemp set is read, then it carries the fibre rope’s figures, not the wire rope’s, and still holds its rated load', async () => {
+    const reader = await signedIn(app.url, 'sm@demo.test', DEMO_PASSWORD)
+    const linesets = (await reader.get('/api/v1/linesets').expect(200)).body as { id: string; kind: string }[]
+    const hemp = linesets.filter((lineset) => lineset.kind.startsWith('hemp-'))
+    expect(hemp.map((lineset) => lineset.kind).sort()).toEqual(['hemp-multi', 'hemp-multi', 'hemp-single'])
+    for (const { id } of hemp) {
+      const set = (await reader.get(`/api/v1/linesets/${id}`).expect(200)).body
+      expect(set, set.name).toMatchObject(HEMP_LINE)
+      // The demo venue's design factor is 8 (seeded); 1,400 lb / 8 = 175 lb, not a 1/4 in wire rope's 875 lb.
+      expect(workingLoadLimit(set.liftLineBreakingStrength, 8).toNumber(), set.name).toBe(175)
+      // Its rated load fits what its lines hold together (the single line alone for the chandelier).
+      expect(set.ratedLoad, set.name).toBeLessThanOrEqual(175 * set.pickPoints.length)
+    }
+    const chandelier = DEMO_LINESETS.find((lineset) => lineset.name === 'Chandelier line')!
+    expect(chandelier).toMatchObject({ kind: 'hemp-single', ...HEMP_LINE })
+    // The house's wire rope stays on the counterweight sets and the spot lines.
+    for (const lineset of DEMO_LINESETS.filter((l) => !l.kind.startsWith('hemp-')))
+      expect(lineset.liftLineBreakingStrength, lineset.name).toBe(7000)
   })
 
   it('when seeding is asked again, then it leaves the venue as it was', async () => {

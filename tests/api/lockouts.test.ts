@@ -75,17 +75,17 @@ describe('locking a lineset out', () => {
   it('when the lock-out is released, then the set is ready again and the history says both in words', async () => {
     const id = await freshLineset()
     await director.post(lockoutOf(id), { reason: 'Inspection due' }).expect(201)
-    await administrator.delete(lockoutOf(id)).expect(204)
+    await administrator.delete(lockoutOf(id), { reason: 'Lift lines inspected, no wear' }).expect(204)
     expect((await director.get(`/api/v1/linesets/${id}`)).body).toMatchObject({
       operatingStatus: 'ready',
       lockout: null,
     })
     const events = (await stageManager.get(`/api/v1/linesets/${id}/events`).expect(200)).body.events
     expect(events.slice(0, 2).map((e: { summary: string }) => e.summary)).toEqual([
-      'Lock-out released (it was: Inspection due)',
+      'Lock-out released: Lift lines inspected, no wear (it was: Inspection due)',
       'Locked out: Inspection due',
     ])
-    const again = await director.delete(lockoutOf(id))
+    const again = await director.delete(lockoutOf(id), { reason: 'Again' })
     expect(again.status).toBe(409)
     expect(again.body.error.code).toBe('not_locked_out')
   })
@@ -103,9 +103,32 @@ describe('locking a lineset out', () => {
     const id = await freshLineset()
     for (const client of [operator, stageManager]) {
       expect((await client.post(lockoutOf(id), { reason: 'No' })).status).toBe(403)
-      expect((await client.delete(lockoutOf(id))).status).toBe(403)
+      expect((await client.delete(lockoutOf(id), { reason: 'No' })).status).toBe(403)
     }
     expect((await otherVenue.post(lockoutOf(id), { reason: 'No' })).status).toBe(404)
-    expect((await otherVenue.delete(lockoutOf(id))).status).toBe(404)
+    expect((await otherVenue.delete(lockoutOf(id), { reason: 'No' })).status).toBe(404)
+  })
+
+  it('when a release says nothing of what was checked or fixed, then it answers 400 naming reason and the set stays locked out', async () => {
+    const id = await freshLineset()
+    await director.post(lockoutOf(id), { reason: 'Head block noisy' }).expect(201)
+    const fingerprint = await databaseFingerprint(app.handle.db.sequelize)
+    for (const body of [undefined, {}, { reason: '   ' }, { reason: 'a\u0000b' }, { reason: 'x'.repeat(201) }]) {
+      const res = await director.delete(lockoutOf(id), body)
+      expect(res.status, JSON.stringify(body)).toBe(400)
+      expect(Object.keys(res.body.error.fields)).toEqual(['reason'])
+      expect(res.body.error.fields.reason).toMatch(/^What was checked or fixed /)
+    }
+    expect(await databaseFingerprint(app.handle.db.sequelize)).toBe(fingerprint)
+    expect((await director.get(`/api/v1/linesets/${id}`)).body.operatingStatus).toBe('locked-out')
+  })
+
+  it('when a lock-out is released, then the ledger entry keeps both the lock reason and what was checked', async () => {
+    const id = await freshLineset()
+    await director.post(lockoutOf(id), { reason: 'Rope lock slips' }).expect(201)
+    await director.delete(lockoutOf(id), { reason: '  Rope lock shoe replaced and tested  ' }).expect(204)
+    const events = (await director.get(`/api/v1/linesets/${id}/events`).expect(200)).body.events
+    const released = events.find((e: { type: string }) => e.type === 'lineset-released')
+    expect(released.summary).toBe('Lock-out released: Rope lock shoe replaced and tested (it was: Rope lock slips)')
   })
 })

@@ -45,7 +45,7 @@ describe('pre-run checks', () => {
     expect(check.by!.id).toBe(alpha.members['stage-manager'].id)
 
     // The record keeps the moment: releasing the lock-out afterwards changes nothing in it.
-    await director.delete(`/api/v1/linesets/${lockedId}/lockout`).expect(204)
+    await director.delete(`/api/v1/linesets/${lockedId}/lockout`, { reason: 'Checked and cleared' }).expect(204)
     const [listed] = (await stageManager.get('/api/v1/pre-run-checks?limit=1').expect(200)).body as PreRunCheck[]
     expect(listed).toEqual(check)
   })
@@ -60,7 +60,7 @@ describe('pre-run checks', () => {
   it('when changes follow a check, then the technical director sees the check and every change since it, newest first', async () => {
     const check = (await director.post('/api/v1/pre-run-checks', {}).expect(201)).body as PreRunCheck
     await director.post(`/api/v1/linesets/${alpha.linesetId}/lockout`, { reason: 'Loose clamp' }).expect(201)
-    await director.delete(`/api/v1/linesets/${alpha.linesetId}/lockout`).expect(204)
+    await director.delete(`/api/v1/linesets/${alpha.linesetId}/lockout`, { reason: 'Checked and cleared' }).expect(204)
     const latest = (await director.get('/api/v1/pre-run-checks/latest').expect(200)).body as LatestPreRunCheck
     expect(latest.check!.id).toBe(check.id)
     expect(latest.changesSince.map((change) => change.type)).toEqual(['lineset-released', 'lineset-locked-out'])

@@ -141,6 +141,7 @@ const ROUTES: RouteCase[] = [
   {
     method: 'delete',
     path: () => '/api/v1/linesets/00000000-0000-4000-8000-000000000000/lockout',
+    body: () => ({ reason: 'Roles' }),
     expected: editors(404),
   },
   { method: 'get', path: () => '/api/v1/brick-stock', expected: all(200) },

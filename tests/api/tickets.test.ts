@@ -221,7 +221,9 @@ describe('deciding', () => {
     const again = await act(admin, ticket.id, 'decline', { version: 1, comment: 'Too late' })
     expect(again.status).toBe(409)
     expect(again.body.error).toMatchObject({ code: 'ticket_state', fields: { state: 'approved' } })
-    expect(again.body.error.message).toMatch(/approved/)
+    expect(again.body.error.message).toBe(
+      'This ticket has already been approved. Only a ticket awaiting a decision can be declined.',
+    )
     // An approval changes nothing at the rail: the empty arbor is still short of the hang until it is loaded.
     expect(await operatingStatusOf(operator, linesetId)).toBe('out-of-balance')
   })

@@ -3,6 +3,7 @@ import { flushPromises, type VueWrapper } from '@vue/test-utils'
 import { arborsApi } from '../../src/api/arbors'
 import { ApiError } from '../../src/api/errors'
 import LinesetLockoutPanel from '../../src/components/LinesetLockoutPanel.vue'
+import { messagesUnder, press, typeInto } from './dialogFields'
 import { mountWithApp } from './mount'
 
 vi.mock('../../src/api/arbors', () => ({
@@ -52,13 +53,52 @@ describe('LinesetLockoutPanel', () => {
     expect(w.get('[data-testid="lockout-error"]').text()).toBe('Reason must not be empty')
   })
 
-  it('when the lock-out is released, then the panel says the set is not locked out', async () => {
+  it('when Release is pressed, then nothing is sent until the release is confirmed with what was checked', async () => {
     vi.mocked(arborsApi.release).mockResolvedValue(undefined)
     const w = mountPanel({ lockout, editable: true })
     await w.get('[data-testid="lockout-release"]').trigger('click')
     await flushPromises()
-    expect(arborsApi.release).toHaveBeenCalledWith(ID)
+    expect(document.querySelector('[data-testid="lockout-release-dialog"]')?.textContent).toContain('Lift line frayed')
+    expect(arborsApi.release).not.toHaveBeenCalled()
+    typeInto('lockout-release-reason', 'Lift line replaced and trimmed')
+    press('lockout-release-confirm')
+    await flushPromises()
+    expect(arborsApi.release).toHaveBeenCalledWith(ID, { reason: 'Lift line replaced and trimmed' })
     expect(w.get('[data-testid="lockout-none"]').text()).toBe('This lineset is not locked out.')
     expect(w.emitted('changed')).toEqual([[null]])
+  })
+
+  it('when the release is cancelled, then the set stays locked out and nothing is sent', async () => {
+    const w = mountPanel({ lockout, editable: true })
+    await w.get('[data-testid="lockout-release"]').trigger('click')
+    await flushPromises()
+    const cancel = [
+      ...document.querySelectorAll<HTMLButtonElement>('[data-testid="lockout-release-dialog"] button'),
+    ].find((button) => button.textContent?.trim() === 'Cancel')
+    cancel!.click()
+    await flushPromises()
+    expect(arborsApi.release).not.toHaveBeenCalled()
+    expect(w.get('[data-testid="lockout-current"]').text()).toContain('Lift line frayed')
+    expect(w.emitted('changed')).toBeUndefined()
+  })
+
+  it('when the server refuses a release without a reason, then its words show under the field and the set stays locked out', async () => {
+    vi.mocked(arborsApi.release).mockRejectedValue(
+      new ApiError(400, 'validation_failed', 'Check this field', {
+        reason: 'What was checked or fixed must not be empty',
+      }),
+    )
+    const w = mountPanel({ lockout, editable: true })
+    await w.get('[data-testid="lockout-release"]').trigger('click')
+    await flushPromises()
+    press('lockout-release-confirm')
+    await flushPromises()
+    expect(arborsApi.release).toHaveBeenCalledWith(ID, { reason: '' })
+    expect(messagesUnder('lockout-release-reason')).toBe('What was checked or fixed must not be empty')
+    expect(w.get('[data-testid="lockout-current"]').text()).toContain('Lift line frayed')
+    expect(w.emitted('changed')).toBeUndefined()
+    typeInto('lockout-release-reason', 'Lift line replaced')
+    await flushPromises()
+    expect(messagesUnder('lockout-release-reason')).toBe("Kept in the lineset's history with the lock-out")
   })
 })

@@ -32,6 +32,7 @@ let wrapper: VueWrapper | undefined
 afterEach(() => {
   wrapper?.unmount()
   vi.clearAllMocks()
+  sessionStorage.clear() // ticks kept on the tab would carry into the next test's ticket
 })
 
 /** Opens the ticket page; `checks` are the findings stored with the ticket's hang revision. */
@@ -117,12 +118,16 @@ describe('TicketDetailView: deciding', () => {
   it('when someone decided first, then the 409 is said and the ticket is read again', async () => {
     const w = await openTicket('administrator', ticket())
     vi.mocked(ticketsApi.approve).mockRejectedValue(
-      new ApiError(409, 'ticket_state', 'This ticket is approved (state "approved"), so it cannot be approved'),
+      new ApiError(
+        409,
+        'ticket_state',
+        'This ticket has already been approved. Only a ticket awaiting a decision can be approved.',
+      ),
     )
     vi.mocked(ticketsApi.get).mockResolvedValue(ticket({ state: 'approved', version: 1 }))
     await click(w, 'ticket-approve')
     expect(ticketsApi.get).toHaveBeenCalledTimes(2)
-    expect(w.find('[data-testid="ticket-move-error"]').text()).toContain('This ticket is approved')
+    expect(w.find('[data-testid="ticket-move-error"]').text()).toContain('This ticket has already been approved.')
     expect(has(w, 'ticket-state-approved')).toBe(true)
   })
 

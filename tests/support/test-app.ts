@@ -76,8 +76,9 @@ export class Client {
   put(path: string, body?: object) {
     return this.agent.put(path).set('X-CSRF-Token', this.csrfToken).send(body)
   }
-  delete(path: string) {
-    return this.agent.delete(path).set('X-CSRF-Token', this.csrfToken)
+  delete(path: string, body?: object) {
+    const req = this.agent.delete(path).set('X-CSRF-Token', this.csrfToken)
+    return body ? req.send(body) : req
   }
 }
 

@@ -13,6 +13,9 @@ const PIPE = {
   pipeSectionModulus: 0.326,
 }
 const LIFT_LINE = { liftLineWeightPerLength: 0.11, liftLineBreakingStrength: 7000 }
+// The hemp sets' fibre rope, about a 3/8 in manila line (weight and breaking strength from memory, demo data):
+// far lighter and weaker than the wire rope, so a hemp set never reads a wire rope's working load limit.
+export const HEMP_LINE = { liftLineWeightPerLength: 0.04, liftLineBreakingStrength: 1400 }
 
 interface Plan {
   name: string
@@ -134,13 +137,14 @@ function figuresFor(plan: Plan, index: number): Omit<LinesetInput, 'number' | 'n
         ratedLoad: 250,
         sandbagWeight: plan.notes ? 60 : null,
         travel: 50,
-        liftLineWeightPerLength: 0.04,
-        liftLineBreakingStrength: 1400,
+        ...HEMP_LINE,
       }
     case 'hemp-single':
     case 'spot-line':
       return {
         ...base,
+        // A spot line is rigged on wire rope; a single hemp line is the house's fibre rope.
+        ...(kind === 'hemp-single' ? HEMP_LINE : {}),
         pipeSize: 'custom',
         pipeWeightPerLength: 0,
         battenLength: 1,

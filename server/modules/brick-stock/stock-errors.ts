@@ -26,5 +26,5 @@ export function shortOf(
 export function unknownBrickType(move: BrickMove, retired = false) {
   const message = retired ? 'This brick type is retired; no bricks of it can be added' : 'No such brick type here'
   const field = move.field ? move.field.replace(/count$/, 'brickTypeId') : 'brickTypeId'
-  return new AppError(400, 'validation_failed', `Check this field: ${field}`, { [field]: message })
+  return new AppError(400, 'validation_failed', `${message}.`, { [field]: message })
 }

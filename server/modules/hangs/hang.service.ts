@@ -36,7 +36,7 @@ async function refuseUnusableProduction(tx: TransactionContext, id: string) {
     : production.state === 'closed'
       ? 'That production has closed'
       : null
-  if (problem) throw new AppError(400, 'validation_failed', `Check this field: productionId`, { productionId: problem })
+  if (problem) throw new AppError(400, 'validation_failed', `${problem}.`, { productionId: problem })
 }
 
 const summaryOf = (row: HangModel, system: UnitSystem): HangSummary => ({

@@ -15,8 +15,12 @@ export function summarizeStockEvent(type: string, payload: Record<string, unknow
     }
     case 'lineset-locked-out':
       return `Locked out: ${payload.reason ?? 'no reason given'}`
-    case 'lineset-released':
-      return payload.reason ? `Lock-out released (it was: ${payload.reason})` : 'Lock-out released'
+    case 'lineset-released': {
+      // Releases recorded before a release reason was asked for carry only the lock's reason.
+      const checked =
+        typeof payload.releaseReason === 'string' && payload.releaseReason ? `: ${payload.releaseReason}` : ''
+      return `Lock-out released${checked}${payload.reason ? ` (it was: ${payload.reason})` : ''}`
+    }
     default:
       return undefined
   }

@@ -1,4 +1,4 @@
-import type { Lockout, LockoutInput } from '../../../shared/schemas/lockout.js'
+import type { Lockout, LockoutInput, LockoutReleaseInput } from '../../../shared/schemas/lockout.js'
 import { inTransaction, type ServiceContext, type TransactionContext } from '../../context.js'
 import { AppError, notFound } from '../../http/errors.js'
 import { rows } from '../brick-stock/stock-sql.js'
@@ -35,8 +35,11 @@ export function lockOut(ctx: ServiceContext, id: string, body: LockoutInput): Pr
   })
 }
 
-/** Releases a lock-out, only if the lineset is locked out (409 otherwise); the ledger keeps why it was. */
-export function releaseLockout(ctx: ServiceContext, id: string): Promise<void> {
+/**
+ * Releases a lock-out, only if the lineset is locked out (409 otherwise); the ledger keeps why it was locked out
+ * (`reason`) and what was checked or fixed before release (`releaseReason`).
+ */
+export function releaseLockout(ctx: ServiceContext, id: string, body: LockoutReleaseInput): Promise<void> {
   return inTransaction(ctx, async (tx) => {
     const released = await rows<{ reason: string }>(
       tx,
@@ -47,6 +50,9 @@ export function releaseLockout(ctx: ServiceContext, id: string): Promise<void> {
       [id, tx.actor.venueId],
     )
     if (!released.length) await refuseWhy(tx, id, 'released')
-    await recordLinesetChange(tx, 'lineset-released', id, { reason: released[0]!.reason })
+    await recordLinesetChange(tx, 'lineset-released', id, {
+      reason: released[0]!.reason,
+      releaseReason: body.reason,
+    })
   })
 }

@@ -48,15 +48,32 @@ export async function lockTicket(tx: TransactionContext, id: string): Promise<Lo
   return ticket
 }
 
-/** 409 naming the state the ticket is in, and what the move needed. */
+// Where the ticket stands, said to the person whose move came too late or too early.
+const STATE_SENTENCES: Record<TicketState, string> = {
+  requested: 'This ticket is still awaiting a decision.',
+  approved: 'This ticket has already been approved.',
+  declined: 'This ticket has already been declined.',
+  withdrawn: 'This ticket has been withdrawn.',
+  loading: 'This ticket is already being loaded.',
+  loaded: 'This ticket has already been loaded.',
+}
+
+// What each move does, after "only a ticket ... can".
+const MOVE_WORDS: Record<string, string> = {
+  approved: 'be approved',
+  declined: 'be declined',
+  withdrawn: 'be withdrawn',
+  started: 'start loading',
+  completed: 'be recorded as loaded',
+}
+
+/** 409 saying in words where the ticket stands and what the move needed; the state's name is in `fields`. */
 export function wrongState(ticket: LockedTicket, move: string, needed: readonly TicketState[]) {
   const wanted = needed.map((state) => STATE_WORDS[state]).join(' or ')
-  return new AppError(
-    409,
-    'ticket_state',
-    `This ticket is ${STATE_WORDS[ticket.state]} (state "${ticket.state}"), so it cannot be ${move}; only a ticket ${wanted} can`,
-    { state: ticket.state },
-  )
+  const does = MOVE_WORDS[move] ?? `be ${move}`
+  return new AppError(409, 'ticket_state', `${STATE_SENTENCES[ticket.state]} Only a ticket ${wanted} can ${does}.`, {
+    state: ticket.state,
+  })
 }
 
 /**

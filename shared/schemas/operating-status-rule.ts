@@ -24,8 +24,10 @@ export interface OperatingFacts {
 
 /**
  * A lineset's operating status. Out of service and locked out come first (nobody operates it, whatever
- * else holds); then a current hang whose figures say stop (no ticket can balance it); then a ticket being loaded; then a ticket awaiting a decision, which explains why the arbor
- * does not yet match a newly saved hang; then an imbalance the rail reported or the figures show; else ready.
+ * else holds); then a current hang whose figures say stop (no ticket can balance it); then a ticket being loaded;
+ * then an imbalance the rail reported or the figures show, even while a change for it awaits a decision (the
+ * set must not fly meanwhile, and it reads the same before and after the approval); then a ticket awaiting a
+ * decision on a set that balances as it stands; else ready.
  * A lineset needing inspection keeps its own status beside this one.
  *
  * @example
@@ -37,8 +39,8 @@ export function operatingStatus(facts: OperatingFacts): OperatingStatus {
   if (facts.lockedOut) return 'locked-out'
   if (facts.hangSaysStop) return 'unsafe-hang'
   if (facts.openTicket === 'loading') return 'loading'
-  if (facts.openTicket === 'requested') return 'awaiting-approval'
   if (facts.feltBalance && facts.feltBalance !== 'balanced') return 'out-of-balance'
   if (facts.outOfBalance !== null && Dec(facts.outOfBalance).abs().gt(Dec(facts.tolerance))) return 'out-of-balance'
+  if (facts.openTicket === 'requested') return 'awaiting-approval'
   return 'ready'
 }

@@ -7,8 +7,8 @@ export const OPERATING_STATUSES = [
   'locked-out',
   'unsafe-hang',
   'loading',
-  'awaiting-approval',
   'out-of-balance',
+  'awaiting-approval',
   'ready',
 ] as const
 export type OperatingStatus = (typeof OPERATING_STATUSES)[number]

@@ -89,7 +89,7 @@ describe('operating status in the lineset list', () => {
     expect(await statusOf(id)).toBe('ready')
   })
 
-  it('when a change ticket is requested or being loaded, then the set reads awaiting approval, then loading', async () => {
+  it('when a change ticket is requested or being loaded, then the figures speak first, then loading', async () => {
     const { id, hang } = await hungLineset()
     const ticket = await app.handle.db.models.WeightChangeTicket.create({
       venueId: alpha.venueId,
@@ -101,11 +101,14 @@ describe('operating status in the lineset list', () => {
       requiredWeight: null,
       loadedWeight: null,
     })
+    // The arbor is empty: the hang is out of balance, and says so while its change waits for a decision.
+    expect(await statusOf(id)).toBe('out-of-balance')
+    await count(id, 5) // 8.8 lb batten heavy, within the 10 lb tolerance
     expect(await statusOf(id)).toBe('awaiting-approval')
     await ticket.update({ state: 'loading' })
     expect(await statusOf(id)).toBe('loading')
     await ticket.update({ state: 'loaded' })
-    expect(await statusOf(id)).toBe('out-of-balance')
+    expect(await statusOf(id)).toBe('ready')
   })
 
   it('when the last completion was felt batten heavy, then the set is out of balance until the arbor is counted again', async () => {

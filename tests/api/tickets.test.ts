@@ -56,7 +56,8 @@ describe('opening a ticket', () => {
     })
     // 200 lb drop + 108.8 lb batten (40 ft x 2.72 lb/ft) = 308.8 lb; arbor 90 + 110 + 5 x 20 = 300 lb.
     expect(res.body.expectedOutOfBalance).toBeCloseTo(8.8, 6)
-    expect(await operatingStatusOf(stageManager, linesetId)).toBe('awaiting-approval')
+    // Its arbor is still empty: the set reads out of balance (do not operate) while the change waits.
+    expect(await operatingStatusOf(stageManager, linesetId)).toBe('out-of-balance')
   })
 
   it('when weight comes off, then the change is negative and the arbor after holds less', async () => {

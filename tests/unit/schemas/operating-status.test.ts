@@ -31,8 +31,10 @@ describe('operating status', () => {
     expect(operatingStatus({ ...calm, feltBalance: 'balanced' })).toBe('ready')
   })
 
-  it('when a ticket is open, then requested reads awaiting approval, loading reads loading, approved changes nothing', () => {
-    expect(operatingStatus({ ...calm, openTicket: 'requested', outOfBalance: 50 })).toBe('awaiting-approval')
+  it('when a ticket is open, then requested reads awaiting approval unless the figures say out of balance, loading reads loading, approved changes nothing', () => {
+    expect(operatingStatus({ ...calm, openTicket: 'requested' })).toBe('awaiting-approval')
+    expect(operatingStatus({ ...calm, openTicket: 'requested', outOfBalance: 50 })).toBe('out-of-balance')
+    expect(operatingStatus({ ...calm, openTicket: 'requested', feltBalance: 'arbor-heavy' })).toBe('out-of-balance')
     expect(operatingStatus({ ...calm, openTicket: 'loading', outOfBalance: 50 })).toBe('loading')
     expect(operatingStatus({ ...calm, openTicket: 'approved', outOfBalance: 50 })).toBe('out-of-balance')
     expect(operatingStatus({ ...calm, openTicket: 'approved' })).toBe('ready')

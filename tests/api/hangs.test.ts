@@ -164,10 +164,25 @@ describe('revisions', () => {
     expect(list[0].totalLoad).toBeGreaterThan(0)
   })
 
+  it('when a save only repeats the latest revision, then it answers 409 hang_unchanged and writes nothing; any change saves', async () => {
+    const linesetId = await freshLineset()
+    await save(linesetId, electric()).expect(201)
+    const before = await databaseFingerprint(app.handle.db.sequelize)
+    const again = await save(linesetId, electric(), 1)
+    expect(again.status).toBe(409)
+    expect(again.body.error.code).toBe('hang_unchanged')
+    expect(again.body.error.message).toMatch(/^Nothing has changed since revision 1/)
+    expect(await databaseFingerprint(app.handle.db.sequelize)).toBe(before)
+    // A different category changes no figure, but it is a change all the same.
+    const recategorised = electric().map((item, k) => (k === 2 ? { ...item, category: 'scenery' } : item))
+    expect((await save(linesetId, recategorised, 1).expect(201)).body.revision).toBe(2)
+    expect((await save(linesetId, recategorised, 2, { title: 'Act one, notes' }).expect(201)).body.revision).toBe(3)
+  })
+
   it('when a save is based on an older revision, then it answers 409 with the latest number and writes nothing', async () => {
     const linesetId = await freshLineset()
     await save(linesetId, electric()).expect(201)
-    await save(linesetId, electric(), 1).expect(201)
+    await save(linesetId, electric(), 1, { title: 'Act one, second look' }).expect(201)
     const before = await databaseFingerprint(app.handle.db.sequelize)
     for (const stale of [null, 1, 7]) {
       const res = await save(linesetId, electric(), stale)

@@ -11,6 +11,7 @@ import { venueUnitSystem } from '../venues/venue.service.js'
 import { computeHang } from './hang-calculation.js'
 import { entryFromStored, storedFromEntry } from './hang-entry.mapper.js'
 import { insertRevision, latestRevision, staleRevision } from './hang-revision.js'
+import { refuseUnchangedHang } from './unchanged-hang.js'
 import { storedCalculationInput } from './stored-input.js'
 import type { HangModel } from './hang.model.js'
 
@@ -52,7 +53,8 @@ const summaryOf = (row: HangModel, system: UnitSystem): HangSummary => ({
 /**
  * Saves a new revision of a lineset's hang: the items are expanded and recomputed here with the shared engine
  * (whatever a client computed is not asked for), then items, engine input and result and a `hang-saved` ledger
- * entry are written in one transaction. A save based on anything but the latest revision answers 409.
+ * entry are written in one transaction. A save based on anything but the latest revision answers 409, and so does one
+ * that only repeats the latest revision (`hang_unchanged`).
  */
 export function saveHang(ctx: ServiceContext, linesetId: string, body: HangSave): Promise<HangRevision> {
   return inTransaction(ctx, async (tx) => {
@@ -63,6 +65,12 @@ export function saveHang(ctx: ServiceContext, linesetId: string, body: HangSave)
     const productionId = body.productionId ?? null
     if (productionId) await refuseUnusableProduction(tx, productionId)
     const { input, result } = await computeHang(tx, lineset, body.items, system)
+    await refuseUnchangedHang(
+      tx,
+      latest,
+      { linesetId, title: body.title, productionId, items: body.items, input },
+      system,
+    )
     const revision = (latest ?? 0) + 1
     const createdAt = tx.clock.now()
     const totalLoad = storedFromApi(result.totalLoad, 'weight', system)!

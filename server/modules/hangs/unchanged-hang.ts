@@ -1,6 +1,6 @@
 import { isDeepStrictEqual } from 'node:util'
 import type { CalculationInput } from '../../../shared/schemas/calculation.js'
-import type { HangEntry } from '../../../shared/schemas/hang.js'
+import type { HangEntry } from '../../../shared/hang/hang-items.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 import type { TransactionContext } from '../../context.js'
 import { AppError } from '../../http/errors.js'

@@ -269,6 +269,7 @@ describe('loading', () => {
       loaded: [{ brickTypeId: alpha.brickTypeId, count: 6 }],
       feltBalance: 'balanced',
       note: 'One more brick felt right',
+      differsFromPlan: true,
     })
     expect(done.status).toBe(200)
     expect(done.body).toMatchObject({ state: 'loaded', feltBalance: 'balanced' })
@@ -299,6 +300,7 @@ describe('loading', () => {
       version: 2,
       loaded: [{ brickTypeId: alpha.brickTypeId, count: 5000 }],
       feltBalance: 'batten-heavy',
+      differsFromPlan: true,
     })
     expect(res.status).toBe(409)
     expect(res.body.error).toMatchObject({ code: 'not_enough_bricks' })

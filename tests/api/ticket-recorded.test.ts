@@ -90,6 +90,8 @@ describe('recording counts that differ from the plan', () => {
       ]),
     )
     expect(await operatingStatusOf(operator, linesetId)).toBe('out-of-balance')
+    const events = (await operator.get(`/api/v1/linesets/${linesetId}/events`).expect(200)).body.events
+    expect(events[0].summary).toContain('not the plan: 12 × Half recorded, the plan was 0')
   })
 
   it('when a planned type is miscounted, then that type is named; counts as planned need no flag and keep the expected figure', async () => {

@@ -285,7 +285,7 @@ describe('loading', () => {
     expect(await operatingStatusOf(stageManager, linesetId)).toBe('out-of-balance')
     const events = (await operator.get(`/api/v1/linesets/${linesetId}/events`).expect(200)).body.events
     expect(events.slice(0, 4).map((event: { summary: string }) => event.summary)).toEqual([
-      'Loaded for hang revision 1, “Drop of 200 lb”: Full 0 → 6; felt balanced at the rail (One more brick felt right)',
+      'Loaded for hang revision 1, “Drop of 200 lb”: Full 0 → 6; felt balanced at the rail; not the plan: 6 × Full recorded, the plan was 5 (One more brick felt right)',
       'Loading started for hang revision 1, “Drop of 200 lb”: do not operate',
       'Change to hang revision 1, “Drop of 200 lb” approved, bricks held in reserve',
       'Asked for the weight change to hang revision 1, “Drop of 200 lb”: 5 × Full on',

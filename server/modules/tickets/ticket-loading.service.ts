@@ -74,7 +74,7 @@ export function completeTicket(ctx: ServiceContext, id: string, body: TicketComp
       target.set(brick.brickTypeId, { count: brick.count })
       fields.set(brick.brickTypeId, `loaded.${index}.count`)
     })
-    const loadedOutOfBalance = await weighRecorded(
+    const recorded = await weighRecorded(
       tx,
       id,
       [...target].map(([brickTypeId, { count }]) => ({
@@ -86,7 +86,7 @@ export function completeTicket(ctx: ServiceContext, id: string, body: TicketComp
     )
     await rows(tx, 'UPDATE weight_change_tickets SET loaded_out_of_balance = $2 WHERE id = $1 RETURNING id', [
       id,
-      loadedOutOfBalance,
+      recorded.outOfBalance,
     ])
     const moves: BrickMove[] = [...target].map(([brickTypeId, { count }]) => ({
       brickTypeId,
@@ -122,6 +122,7 @@ export function completeTicket(ctx: ServiceContext, id: string, body: TicketComp
       ticket: stepFacts(ticket),
       loaded,
       feltBalance: body.feltBalance,
+      ...(recorded.differences.length ? { differsFromPlan: recorded.differences } : {}),
       ...(note ? { note } : {}),
     })
     return readTicket(tx, id)

@@ -24,14 +24,15 @@ const balanceWords = (value: number, weight: (n: number) => string) =>
  * `differs_from_plan` naming the field `differsFromPlan`, each difference and the out of balance they would give,
  * unless the body confirms them; a typing slip (12 half bricks for 1) must not pass silently for a load.
  * Answers the out of balance the recorded counts give (kg at the batten, SI string; null when the plan had no
- * figure), worked out from the plan's own figure with the shared engine, as the completion form does.
+ * figure), worked out from the plan's own figure with the shared engine, as the completion form does, and the
+ * differences in words for the ledger.
  */
 export async function weighRecorded(
   tx: TransactionContext,
   ticketId: string,
   counts: readonly RecordedCount[],
   confirmed: boolean,
-): Promise<string | null> {
+): Promise<{ outOfBalance: string | null; differences: string[] }> {
   const [ticket] = await rows<{ expected: string | null; kind: string }>(
     tx,
     `SELECT t.expected_out_of_balance AS expected, l.kind
@@ -66,5 +67,5 @@ export async function weighRecorded(
       { differsFromPlan: 'Confirm the counts that differ from the plan, or correct them' },
     )
   }
-  return recorded
+  return { outOfBalance: recorded, differences: differences.map(recordedDifferenceWords) }
 }

@@ -49,6 +49,9 @@ describe('LinesetBalanceResults: what the arbor should hold, against what it hol
     const w = show(held(28, 0))
     expect(w.text()).toContain('The arbor should hold')
     expect(w.text()).not.toContain('to load on the arbor')
+    // The engine's own note says the same: a total, not an amount to load on top.
+    expect(w.text()).toContain('In all, the arbor should hold 28 × Full (560 lb): a total, not bricks to add')
+    expect(w.text()).not.toContain('Load 28')
     expect(text(w, 'balance-hold-explained')).toBe('In all, for this hang: a total, not bricks to add.')
     expect(text(w, 'balance-brick-Full')).toContain('28 × Full')
     expect(text(w, 'balance-hold-Full')).toBe('holds 28 now: nothing to move')

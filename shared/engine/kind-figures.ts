@@ -107,6 +107,7 @@ function planCheck(input: CalculationInput, counts: number[], loaded: Decimal, u
   return check(
     'brick-plan',
     'info',
-    `Load ${plan} (${formatQuantity(loaded, 'weight', units)}) on the arbor, after the batten is loaded`,
+    // A total for the hang, never an amount to add: a loader reading it as the latter would double the weight.
+    `In all, the arbor should hold ${plan} (${formatQuantity(loaded, 'weight', units)}): a total, not bricks to add; load the batten before the arbor`,
   )
 }

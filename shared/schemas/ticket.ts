@@ -30,7 +30,8 @@ export type TicketDecline = z.infer<typeof ticketDeclineSchema>
 
 /**
  * `/complete`: what the arbor holds per brick type once loaded (a type left out stays as the plan leaves it),
- * how the set felt at the rail, and a note. A type named twice is refused.
+ * how the set felt at the rail, and a note. A type named twice is refused. Counts that differ from the plan
+ * are refused (422) unless `differsFromPlan` is true: a typing slip must not pass for a load.
  *
  * @example
  * ticketCompleteSchema.safeParse({ version: 2, loaded: [{ brickTypeId, count: 14 }], feltBalance: 'balanced' }).success // true
@@ -55,6 +56,7 @@ export const ticketCompleteSchema = z.object({
     }),
   feltBalance: z.enum(FELT_BALANCES, { error: 'Say how the set felt at the rail' }),
   note: multiLineText('Note', 2000).optional(),
+  differsFromPlan: z.boolean({ error: 'Say true or false' }).optional(),
 })
 export type TicketComplete = z.infer<typeof ticketCompleteSchema>
 
@@ -70,6 +72,8 @@ export interface TicketBrickLine {
   reserved: number
   /** Signed count actually moved, once loaded. */
   loaded: number | null
+  /** One brick of this type, in the venue's units (null when the type's weight is unknown). */
+  unitWeight: number | null
 }
 
 /** A comment or decision on a ticket, oldest first. */
@@ -92,7 +96,14 @@ export interface TicketView {
   changes: { brickTypeId: string; name: string; count: number }[]
   arborAfter: { brickTypeId: string; count: number }[]
   bricks: TicketBrickLine[]
+  /** The plan's out of balance at the batten, signed (+ batten heavy). */
   expectedOutOfBalance: number | null
+  /** Once loaded: the out of balance the recorded counts give, signed like the expected one. */
+  loadedOutOfBalance: number | null
+  /** 1 single purchase, 2 double purchase. */
+  purchaseRatio: 1 | 2
+  /** The venue's balance tolerance at the batten, in its units. */
+  balanceTolerance: number
   unitSystem: UnitSystem
   openedBy: { id: string; name: string } | null
   openedAt: string

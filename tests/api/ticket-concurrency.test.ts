@@ -88,6 +88,7 @@ describe('ticket moves under concurrency', () => {
           version: 2,
           loaded: [{ brickTypeId: alpha.brickTypeId, count: 3 }],
           feltBalance: 'arbor-heavy',
+          differsFromPlan: true,
         }),
       ),
     )

@@ -316,6 +316,7 @@ describe('loading', () => {
       loaded: [{ brickTypeId: alpha.brickTypeId, count: 6 }],
       feltBalance: 'balanced',
       note: 'One more brick felt right',
+      differsFromPlan: true,
     })
     expect(done.status).toBe(200)
     expect(done.body).toMatchObject({ state: 'loaded', feltBalance: 'balanced' })
@@ -331,7 +332,7 @@ describe('loading', () => {
     expect(await operatingStatusOf(stageManager, linesetId)).toBe('out-of-balance')
     const events = (await operator.get(`/api/v1/linesets/${linesetId}/events`).expect(200)).body.events
     expect(events.slice(0, 4).map((event: { summary: string }) => event.summary)).toEqual([
-      'Loaded for hang revision 1, “Drop of 200 lb”: Full 0 → 6; felt balanced at the rail (One more brick felt right)',
+      'Loaded for hang revision 1, “Drop of 200 lb”: Full 0 → 6; felt balanced at the rail; not the plan: 6 × Full recorded, the plan was 5 (One more brick felt right)',
       'Loading started for hang revision 1, “Drop of 200 lb”: do not operate',
       'Change to hang revision 1, “Drop of 200 lb” approved, bricks held in reserve',
       'Asked for the weight change to hang revision 1, “Drop of 200 lb”: 5 × Full on',
@@ -346,6 +347,7 @@ describe('loading', () => {
       version: 2,
       loaded: [{ brickTypeId: alpha.brickTypeId, count: 5000 }],
       feltBalance: 'batten-heavy',
+      differsFromPlan: true,
     })
     expect(res.status).toBe(409)
     expect(res.body.error).toMatchObject({ code: 'not_enough_bricks' })

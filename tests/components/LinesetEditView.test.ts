@@ -3,6 +3,8 @@ import { flushPromises, type VueWrapper } from '@vue/test-utils'
 import { createPinia, setActivePinia } from 'pinia'
 import type { Role } from '../../shared/schemas/index.js'
 import { ApiError } from '../../src/api/errors'
+import { arborsApi } from '../../src/api/arbors'
+import { brickTypesApi } from '../../src/api/brick-types'
 import { linesetsApi } from '../../src/api/linesets'
 import LinesetEditView from '../../src/views/LinesetEditView.vue'
 import { testRouter } from './router'
@@ -122,5 +124,32 @@ describe('LinesetEditView', () => {
     await save(w)
     expect(w.get('[data-testid="lineset-pick-point-3"]').find('.v-messages').text()).toBe('Too near the batten end')
     expect(w.get('[data-testid="lineset-problem"]').text()).toBe('The server refused some fields; each one says why.')
+  })
+})
+
+describe('LinesetEditView: the brick plan against the arbor panel', () => {
+  it('when the arbor panel has read the arbor, then the hang figures show what it holds now beside what it should hold', async () => {
+    const full = {
+      id: 'b1',
+      name: 'Full steel',
+      material: 'Steel',
+      unitWeight: 20,
+      thickness: 2,
+      quantityOwned: 400,
+      version: 1,
+      unitSystem: 'imperial' as const,
+    }
+    vi.mocked(brickTypesApi.list).mockResolvedValueOnce([full])
+    vi.mocked(arborsApi.read).mockResolvedValueOnce({
+      linesetId: lineset().id,
+      bricks: [{ brickTypeId: full.id, name: full.name, count: 3 }],
+      version: 0,
+    })
+    const w = await openLineset('fly-operator')
+    await flushPromises()
+    expect(w.text()).toContain('The arbor should hold')
+    expect(w.get('[data-testid="balance-hold-Full steel"]').text()).toMatch(/^holds 3 now: /)
+    expect(w.get('[data-testid="balance-arbor-moves"]').text()).not.toContain('move only the difference')
+    expect(w.find('[data-testid="app-cautions"]').exists()).toBe(true)
   })
 })

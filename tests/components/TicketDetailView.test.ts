@@ -190,6 +190,10 @@ describe('TicketDetailView: guided loading', () => {
     await w.find('[data-testid="ticket-felt-arbor-heavy"] input').setValue(true)
     await w.find('[data-testid="ticket-note"] textarea').setValue('One extra full brick')
     await click(w, 'ticket-finish')
+    expect(ticketsApi.complete).not.toHaveBeenCalled()
+    expect(w.find('[data-testid="ticket-differs"]').text()).toContain('15 × Full steel recorded, the plan was 14')
+    await w.find('[data-testid="ticket-differs-confirm"] input').setValue(true)
+    await click(w, 'ticket-finish')
     expect(ticketsApi.complete).toHaveBeenCalledWith(ticket().id, {
       version: 2,
       loaded: [
@@ -198,6 +202,7 @@ describe('TicketDetailView: guided loading', () => {
       ],
       feltBalance: 'arbor-heavy',
       note: 'One extra full brick',
+      differsFromPlan: true,
     })
     expect(has(w, 'ticket-state-loaded')).toBe(true)
   })

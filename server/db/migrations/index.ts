@@ -9,6 +9,7 @@ import preRunChecks from './0008-pre-run-checks.js'
 import attachmentUploads from './0009-attachment-uploads.js'
 import liftLineStretch from './0010-lift-line-stretch.js'
 import answerCache from './0011-answer-cache.js'
+import ticketLoadedBalance from './0012-ticket-loaded-balance.js'
 
 export interface Migration {
   name: string
@@ -30,4 +31,5 @@ export const migrations: Migration[] = [
   attachmentUploads,
   liftLineStretch,
   answerCache,
+  ticketLoadedBalance,
 ]

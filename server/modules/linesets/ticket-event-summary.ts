@@ -4,6 +4,8 @@ interface TicketPayload {
   comment?: string
   loaded?: { name?: string; before?: number; after?: number }[]
   feltBalance?: string
+  /** Counts recorded that were not the plan's, in words. */
+  differsFromPlan?: string[]
   note?: string
 }
 
@@ -38,7 +40,8 @@ export function summarizeTicketEvent(type: string, payload: Record<string, unkno
     case 'ticket-loaded': {
       const moved = (p.loaded ?? []).map((b) => `${b.name} ${b.before} → ${b.after}`).join(', ')
       const felt = FELT_WORDS[p.feltBalance ?? ''] ?? 'no balance reported'
-      return `Loaded for ${revision}: ${moved || 'no brick moved'}; ${felt}${p.note ? ` (${p.note})` : ''}`
+      const differs = p.differsFromPlan?.length ? `; not the plan: ${p.differsFromPlan.join(', ')}` : ''
+      return `Loaded for ${revision}: ${moved || 'no brick moved'}; ${felt}${differs}${p.note ? ` (${p.note})` : ''}`
     }
     default:
       return undefined

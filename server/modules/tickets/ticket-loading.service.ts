@@ -6,6 +6,7 @@ import { rows } from '../brick-stock/stock-sql.js'
 import { ticketBricks } from './ticket-bricks.js'
 import { stepFacts } from './ticket-decisions.service.js'
 import { recordTicketStep } from './ticket-ledger.js'
+import { weighRecorded } from './ticket-recorded.js'
 import { readTicket } from './ticket-read.service.js'
 import { lockTicket, moveTicket } from './ticket-store.js'
 
@@ -45,7 +46,8 @@ export function startLoading(ctx: ServiceContext, id: string, body: { version: n
  * Loading -> loaded, all in one transaction: the ticket's reservation goes back to storage, the arbor is set
  * to what was actually loaded (a type not named stays as the plan leaves it) with the difference drawn from or
  * returned to storage (409 naming the type when storage cannot supply it), the felt balance is kept (the
- * lineset's status follows from it), and the ticket and the ledger record what moved.
+ * lineset's status follows from it), and the ticket and the ledger record what moved. Counts that differ from
+ * the plan need `differsFromPlan` (422 otherwise); the ticket keeps the out of balance the counts give.
  */
 export function completeTicket(ctx: ServiceContext, id: string, body: TicketComplete): Promise<TicketView> {
   return inTransaction(ctx, async (tx) => {
@@ -66,11 +68,26 @@ export function completeTicket(ctx: ServiceContext, id: string, body: TicketComp
     )
     const now = new Map(aboard.map((row) => [row.brickTypeId, row.count]))
     const target = new Map(plan.map((b) => [b.brickTypeId, { count: b.arborAfter ?? now.get(b.brickTypeId) ?? 0 }]))
+    const planned = new Map([...target].map(([brickTypeId, { count }]) => [brickTypeId, count]))
     const fields = new Map<string, string>()
     body.loaded.forEach((brick, index) => {
       target.set(brick.brickTypeId, { count: brick.count })
       fields.set(brick.brickTypeId, `loaded.${index}.count`)
     })
+    const recorded = await weighRecorded(
+      tx,
+      id,
+      [...target].map(([brickTypeId, { count }]) => ({
+        brickTypeId,
+        planned: planned.get(brickTypeId) ?? now.get(brickTypeId) ?? 0,
+        recorded: count,
+      })),
+      body.differsFromPlan === true,
+    )
+    await rows(tx, 'UPDATE weight_change_tickets SET loaded_out_of_balance = $2 WHERE id = $1 RETURNING id', [
+      id,
+      recorded.outOfBalance,
+    ])
     const moves: BrickMove[] = [...target].map(([brickTypeId, { count }]) => ({
       brickTypeId,
       count: count - (now.get(brickTypeId) ?? 0),
@@ -105,6 +122,7 @@ export function completeTicket(ctx: ServiceContext, id: string, body: TicketComp
       ticket: stepFacts(ticket),
       loaded,
       feltBalance: body.feltBalance,
+      ...(recorded.differences.length ? { differsFromPlan: recorded.differences } : {}),
       ...(note ? { note } : {}),
     })
     return readTicket(tx, id)

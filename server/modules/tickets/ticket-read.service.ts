@@ -1,3 +1,4 @@
+import { purchaseRatio } from '../../../shared/engine/counterweight.js'
 import type { FeltBalance } from '../../../shared/schemas/operating-status.js'
 import type { TicketComment, TicketView } from '../../../shared/schemas/ticket.js'
 import type { TicketState } from '../../../shared/schemas/workflow-states.js'
@@ -16,10 +17,12 @@ interface TicketRow {
   linesetId: string
   linesetNumber: number
   linesetName: string
+  linesetKind: string
   hangId: string
   hangRevision: number
   hangTitle: string
   expectedOutOfBalance: string | null
+  loadedOutOfBalance: string | null
   createdAt: Date
   opener: Person
   decider: Person
@@ -40,6 +43,7 @@ interface BrickRow {
   loaded: number | null
   arborAfter: number | null
   inStorage: number
+  unitWeight: string | null
 }
 
 const person = (column: string) =>
@@ -62,11 +66,17 @@ function commentsOf(row: TicketRow): TicketComment[] {
 /** The venue's tickets (one, or those in a state, or all), newest first, each with its plan and shortfall. */
 async function ticketViews(tx: TransactionContext, filter: { id?: string; state?: TicketState }) {
   const system = await venueUnitSystem(tx)
+  const [venue] = await rows<{ tolerance: string }>(
+    tx,
+    'SELECT balance_tolerance AS tolerance FROM venues WHERE id = $1',
+    [tx.actor.venueId],
+  )
   const tickets = await rows<TicketRow>(
     tx,
     `SELECT t.id, t.state, t.version, t.lineset_id AS "linesetId", l.number AS "linesetNumber", l.name AS "linesetName",
-            t.hang_id AS "hangId", h.revision AS "hangRevision", h.title AS "hangTitle",
-            t.expected_out_of_balance AS "expectedOutOfBalance", t.created_at AS "createdAt",
+            l.kind AS "linesetKind", t.hang_id AS "hangId", h.revision AS "hangRevision", h.title AS "hangTitle",
+            t.expected_out_of_balance AS "expectedOutOfBalance",
+            t.loaded_out_of_balance AS "loadedOutOfBalance", t.created_at AS "createdAt",
             ${person('o')} AS opener, ${person('d')} AS decider, t.decided_at AS "decidedAt",
             t.decision_comment AS "decisionComment", ${person('c')} AS completer, t.completed_at AS "completedAt",
             t.note, t.felt_balance AS "feltBalance"
@@ -83,7 +93,8 @@ async function ticketViews(tx: TransactionContext, filter: { id?: string; state?
   const bricks = await rows<BrickRow>(
     tx,
     `SELECT tb.ticket_id AS "ticketId", tb.brick_type_id AS "brickTypeId", b.name, tb.planned, tb.reserved,
-            tb.loaded, tb.arbor_after AS "arborAfter", b.in_storage AS "inStorage"
+            tb.loaded, tb.arbor_after AS "arborAfter", b.in_storage AS "inStorage",
+            b.unit_weight AS "unitWeight"
        FROM ticket_bricks tb JOIN brick_types b ON b.id = tb.brick_type_id
       WHERE tb.ticket_id = ANY($1::uuid[]) ORDER BY b.name, b.id`,
     [tickets.map((ticket) => ticket.id)],
@@ -110,8 +121,12 @@ async function ticketViews(tx: TransactionContext, filter: { id?: string; state?
         after: b.arborAfter ?? 0,
         reserved: b.reserved,
         loaded: b.loaded,
+        unitWeight: apiFromStored(b.unitWeight, 'weight', system),
       })),
       expectedOutOfBalance: apiFromStored(row.expectedOutOfBalance, 'weight', system),
+      loadedOutOfBalance: apiFromStored(row.loadedOutOfBalance, 'weight', system),
+      purchaseRatio: purchaseRatio(row.linesetKind),
+      balanceTolerance: apiFromStored(venue!.tolerance, 'weight', system)!,
       unitSystem: system,
       openedBy: row.opener,
       openedAt: row.createdAt.toISOString(),

@@ -53,14 +53,18 @@ afterEach(() => {
   vi.clearAllMocks()
 })
 
-async function openLineset(role: Role) {
+async function openLineset(role: Role, options: { attachTo?: HTMLElement } = {}) {
   const pinia = createPinia()
   setActivePinia(pinia)
   useSessionStore().user = personWith(role)
   useVenueStore().venue = venue
   const router = testRouter()
   await router.push(`/linesets/${lineset().id}`)
-  wrapper = mountWithApp(LinesetEditView, { props: { id: lineset().id }, global: { plugins: [pinia, router] } })
+  wrapper = mountWithApp(LinesetEditView, {
+    props: { id: lineset().id },
+    global: { plugins: [pinia, router] },
+    ...options,
+  })
   await flushPromises()
   return wrapper
 }
@@ -82,6 +86,17 @@ describe('LinesetEditView', () => {
     expect(w.findAll('[data-testid="app-caution"]').length).toBeGreaterThan(5)
     expect(w.get('[data-testid="app-figures-disclaimer"]').text()).toContain('assist a qualified person')
     expect(w.get('[data-testid="app-figures-disclaimer"]').text()).toContain('manufacturer’s ratings')
+  })
+
+  it('when someone presses "The hang", then the page scrolls to the hang editor and the focus lands on it', async () => {
+    // jsdom does not scroll; the call and the focus are what the page does.
+    const scrolled = vi.fn()
+    Element.prototype.scrollIntoView = scrolled
+    const w = await openLineset('fly-operator', { attachTo: document.body })
+    await w.get('[data-testid="lineset-go-to-hang"]').trigger('click')
+    const editor = w.get('[data-testid="hang-editor"]').element
+    expect(scrolled.mock.contexts).toEqual([editor])
+    expect(document.activeElement).toBe(editor)
   })
 
   it('when a technical director opens a lineset, then it can be saved but not deleted', async () => {

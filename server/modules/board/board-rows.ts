@@ -4,6 +4,7 @@ import type { TicketState } from '../../../shared/schemas/workflow-states.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 import { QueryTypes } from 'sequelize'
 import type { ServiceContext } from '../../context.js'
+import { stopCountSql } from '../hangs/hang-stops.js'
 
 // Reads that need no transaction of their own: in the caller's when there is one, else each on its own.
 const rows = <T extends object>(ctx: ServiceContext, sql: string, bind: unknown[]) =>
@@ -78,8 +79,7 @@ export function boardRows(
             h.total_load::float8 AS "hangTotalLoad",
             h.total_load::text AS "hangTotalLoadExact", h.production_id AS "hangProductionId", h.unit_system AS "hangUnits",
             (h.calculation_result -> 'counterweight' ->> 'battenSide')::float8 AS "battenSide",
-            (SELECT count(*) FROM jsonb_array_elements(coalesce(h.calculation_result -> 'checks', '[]'::jsonb)) c
-              WHERE c ->> 'level' = 'danger')::int AS "hangStops",
+            ${stopCountSql('h')} AS "hangStops",
             ${lastChange ? LAST_CHANGE_COLUMNS : NO_LAST_CHANGE}
        FROM linesets l
        LEFT JOIN users lu ON lu.id = l.locked_out_by

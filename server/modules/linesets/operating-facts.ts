@@ -4,6 +4,7 @@ import type { TicketState } from '../../../shared/schemas/workflow-states.js'
 import type { UnitSystem } from '../../../shared/units/systems.js'
 import type { TransactionContext } from '../../context.js'
 import { rows } from '../brick-stock/stock-sql.js'
+import { stopCountSql } from '../hangs/hang-stops.js'
 
 interface LinesetFacts {
   id: string
@@ -44,8 +45,7 @@ export async function operatingFacts(tx: TransactionContext, linesetId?: string)
     tx,
     `SELECT DISTINCT ON (lineset_id) lineset_id AS "linesetId", unit_system AS units,
             (calculation_result -> 'counterweight' ->> 'battenSide')::float8 AS "battenSide",
-            (SELECT count(*) FROM jsonb_array_elements(coalesce(calculation_result -> 'checks', '[]'::jsonb)) c
-              WHERE c ->> 'level' = 'danger')::int AS stops
+            ${stopCountSql()} AS stops
        FROM hangs WHERE venue_id = $1 AND ${only('lineset_id')} ORDER BY lineset_id, revision DESC`,
     bind,
   )

@@ -5,19 +5,15 @@ import {
   recordedDifferenceWords,
   type RecordedBrick,
 } from '../../../shared/schemas/ticket-recorded.js'
-import { displayQuantity } from '../../../shared/units/display.js'
 import type { TransactionContext } from '../../context.js'
 import { apiFromStored } from '../../db/quantities.js'
 import { AppError } from '../../http/errors.js'
 import { rows } from '../brick-stock/stock-sql.js'
+import { balanceWords } from '../paperwork/paper-words.js'
 import { venueUnitSystem } from '../venues/venue.service.js'
 
 /** One brick type at completion: what the plan has the arbor hold and what was recorded, by id. */
 export type RecordedCount = Omit<RecordedBrick, 'name'>
-
-/** "12.5 lb arbor heavy", or "in balance". */
-const balanceWords = (value: number, weight: (n: number) => string) =>
-  value === 0 ? 'in balance' : `${weight(Math.abs(value))} ${value > 0 ? 'batten heavy' : 'arbor heavy'}`
 
 /**
  * Weighs what was recorded at the end of loading. Counts that differ from the plan are refused with 422
@@ -55,11 +51,10 @@ export async function weighRecorded(
   const differences = recordedDifferences(counts.map((c) => ({ ...c, name: typeOf(c.brickTypeId)?.name ?? '' })))
   if (differences.length && !confirmed) {
     const system = await venueUnitSystem(tx)
-    const weight = (value: number) => displayQuantity(value, 'weight', system)
     const balance =
       recorded === null
         ? ''
-        : ` With them the set is ${balanceWords(apiFromStored(recorded, 'weight', system)!, weight)} at the batten.`
+        : ` With them the set is ${balanceWords(apiFromStored(recorded, 'weight', system)!, system)} at the batten.`
     throw new AppError(
       422,
       'differs_from_plan',
